@@ -1,0 +1,116 @@
+package rdstab.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import rdstab.cli.command.CheckCommand;
+import rdstab.solver.error.ConvergenceException;
+import rdstab.solver.error.InputException;
+
+/**
+ * Entry point. Exit status: 0 the run completed (whatever the verdict); 2 bad input; 3 numerical
+ * failure; 4 input/output failure. Errors are one line on stderr; stack traces only with --debug.
+ */
+@Command(name = "rdstab", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+        description = {
+            "Is a steady temperature or concentration field stable? rdstab finds the steady state of a "
+                + "reaction-diffusion case, linearizes about it and reports the rightmost eigenvalues (shift-invert "
+                + "Arnoldi), an energy-method bound beside them, and the verdict with its margin.",
+            "",
+            "Start with:  rdstab check cases/slab-self-heating.yaml",
+            "Case files are YAML; their keys are described in cases/README.md."},
+        subcommands = {CheckCommand.class, CommandLine.HelpCommand.class},
+        footerHeading = "%nExit status:%n",
+        footer = {"  0  the run completed (whatever the verdict)", "  1  internal error (a bug: please report it)", "  2  bad input (usage, case file, formula, parameter)",
+            "  3  numerical failure (no steady state found, eigen-solver did not converge)", "  4  input/output failure"})
+public final class Main implements Runnable {
+
+    /** Exit status: completed. */
+    public static final int OK = 0;
+    /** Exit status: bad input. */
+    public static final int BAD_INPUT = 2;
+    /** Exit status: numerical failure. */
+    public static final int NUMERICAL = 3;
+    /** Exit status: file failure. */
+    public static final int IO = 4;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        throw new CommandLine.ParameterException(spec.commandLine(), "a command is needed, e.g. 'rdstab check CASE'");
+    }
+
+    /** Runs the program and exits with its status. */
+    public static void main(String[] args) {
+        System.exit(execute(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+    }
+
+    /** Runs with the given writers; returns the exit status (for tests). */
+    public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+        boolean debug = java.util.Arrays.asList(args).contains("--debug");
+        CommandLine cl = commandLine();
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setExecutionExceptionHandler((ex, line, parsed) -> handle(ex, line.getErr(), debug));
+        cl.setParameterExceptionHandler((ex, a) -> {
+            PrintWriter e = ex.getCommandLine().getErr();
+            e.println("rdstab: " + ex.getMessage());
+            e.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help' for the options.");
+            e.flush();
+            return BAD_INPUT;
+        });
+        int code = cl.execute(args);
+        out.flush();
+        err.flush();
+        return code;
+    }
+
+    /** The configured command line. */
+    public static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new Main());
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setUsageHelpAutoWidth(true);
+        return cl;
+    }
+
+    static int handle(Exception ex, PrintWriter err, boolean debug) {
+        int code;
+        String msg;
+        if (ex instanceof InputException) {
+            code = BAD_INPUT;
+            msg = ex.getMessage();
+        } else if (ex instanceof ConvergenceException) {
+            code = NUMERICAL;
+            msg = ex.getMessage();
+        } else if (ex instanceof IOException || ex instanceof UncheckedIOException) {
+            code = IO;
+            msg = ex.getMessage();
+        } else if (ex instanceof IllegalArgumentException) {
+            code = BAD_INPUT;
+            msg = ex.getMessage();
+        } else {
+            code = 1;
+            msg = "internal error (" + ex.getClass().getSimpleName() + "): " + ex.getMessage()
+                    + " — please report it with the case file; rerun with --debug for details";
+        }
+        err.println("rdstab: " + (msg == null ? ex.getClass().getSimpleName() : msg.replaceAll("\\s*\\R\\s*", " ")));
+        if (debug) {
+            ex.printStackTrace(err);
+        }
+        err.flush();
+        return code;
+    }
+
+    /** Version from the jar manifest, or "development". */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String v = Main.class.getPackage().getImplementationVersion();
+            return new String[] {"rdstab " + (v == null ? "0.1.0-SNAPSHOT" : v)};
+        }
+    }
+}

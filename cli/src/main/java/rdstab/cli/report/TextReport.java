@@ -1,0 +1,116 @@
+package rdstab.cli.report;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import rdstab.solver.assess.Assessment;
+import rdstab.solver.assess.Verdict;
+import rdstab.solver.drive.CheckResult;
+import rdstab.solver.eigen.EigenPair;
+import rdstab.solver.energy.EnergyRates;
+import rdstab.solver.model.Case;
+
+/** The human-readable report of one check: verdict first, then evidence, then cautions. */
+public final class TextReport {
+
+    private TextReport() {
+    }
+
+    /** Writes the report. */
+    public static void write(CheckResult r, PrintWriter w) {
+        Case c = r.problem().theCase();
+        Assessment a = r.assessment();
+        w.println(c.title());
+        w.println("case " + c.source() + " | " + c.shape().word() + ", " + c.mesh().cells() + " cells, "
+                + r.problem().full().unknowns() + " unknowns | " + parameters(c.parameters()));
+        w.println();
+        w.println("VERDICT: " + a.verdict().word().toUpperCase(Locale.ROOT) + " — " + meaning(a.verdict()));
+        w.printf(Locale.ROOT, "  growth rate      %s per unit time (undecided within ±%.1e)%n", sig(a.growthRate(), 8), a.band());
+        if (Double.isFinite(a.eFoldingTime())) {
+            w.printf(Locale.ROOT, "  e-folding time   %s time units (%s)%n", sig(a.eFoldingTime(), 4),
+                    a.growthRate() > 0 ? "a disturbance grows by e in this time" : "a disturbance shrinks by e in this time");
+        }
+        if (a.frequency() != 0 && Math.abs(a.frequency()) > 1e-12) {
+            w.printf(Locale.ROOT, "  oscillation      frequency %s rad per time unit, period %s%n", sig(Math.abs(a.frequency()), 6),
+                    sig(2 * Math.PI / Math.abs(a.frequency()), 6));
+        }
+        w.printf(Locale.ROOT, "  leading mode     largest in field %s at %s%n", a.peakField(), coords(a.peakX()));
+        w.println("  energy method    " + a.energyVerdict());
+        w.println();
+        w.printf(Locale.ROOT, "Base state (damped Newton: %d steps, residual %.2e, accepted at %.2e)%n",
+                r.base().iterations(), r.base().residual(), r.base().tolerance());
+        for (Map.Entry<String, Double> e : r.baseMax().entrySet()) {
+            w.printf(Locale.ROOT, "  max %-12s %s%n", e.getKey(), sig(e.getValue(), 8));
+        }
+        w.println();
+        w.printf(Locale.ROOT, "Rightmost eigenvalues of J x = λ M x (shift-invert, shift %s%s)%n", sig(r.shift(), 6),
+                r.rightmostCertified() ? ", rightmost set certified" : ", rightmost set not certified");
+        w.println("   #          Re λ             Im λ    residual");
+        int i = 1;
+        for (EigenPair e : r.modes()) {
+            w.printf(Locale.ROOT, "  %2d  %15s  %15s    %.1e%n", i++, sig(e.re(), 10), sig(e.im(), 6), e.residual());
+        }
+        w.println();
+        EnergyRates en = r.energy();
+        w.println("Energy method (growth rates; spectral ≤ numerical abscissa ≤ a-priori bound)");
+        w.printf(Locale.ROOT, "  spectral abscissa    %s%n", sig(a.growthRate(), 8));
+        w.printf(Locale.ROOT, "  numerical abscissa   %s   (sharp energy rate: ‖u(t)‖ ≤ e^(rate·t) ‖u(0)‖)%n",
+                sig(en.numericalAbscissa(), 8));
+        w.printf(Locale.ROOT, "  a-priori bound       %s   (= −μ₁ + max reaction rate = −%s + %s)%n", sig(en.bound(), 8),
+                sig(en.poincare(), 6), sig(en.reactionRate(), 6));
+        if (!a.warnings().isEmpty()) {
+            w.println();
+            w.println("Warnings");
+            for (String s : a.warnings()) {
+                w.println("  - " + s);
+            }
+        }
+        w.println();
+        w.println("Cautions");
+        for (String s : a.cautions()) {
+            w.println("  - " + s);
+        }
+        w.flush();
+    }
+
+    static String meaning(Verdict v) {
+        return switch (v) {
+            case STABLE -> "small disturbances die out";
+            case UNSTABLE -> "a small disturbance grows (runaway or a move to another state)";
+            case MARGINAL -> "at the stability limit within the numerical error; the analysis cannot decide";
+        };
+    }
+
+    static String parameters(Map<String, Double> p) {
+        if (p.isEmpty()) {
+            return "no parameters";
+        }
+        List<String> parts = new ArrayList<>();
+        p.forEach((k, v) -> parts.add(k + " = " + sig(v, 6)));
+        return String.join(", ", parts);
+    }
+
+    static String coords(double[] x) {
+        if (x.length == 1) {
+            return "x = " + sig(x[0], 4);
+        }
+        return "(x, y) = (" + sig(x[0], 4) + ", " + sig(x[1], 4) + ")";
+    }
+
+    /** A number to the given significant digits, without exponent clutter where possible. */
+    public static String sig(double v, int digits) {
+        if (v == 0) {
+            return "0";
+        }
+        if (!Double.isFinite(v)) {
+            return Double.toString(v);
+        }
+        double av = Math.abs(v);
+        if (av >= 1e-4 && av < 1e7) {
+            return new java.math.BigDecimal(v).round(new java.math.MathContext(digits)).stripTrailingZeros().toPlainString();
+        }
+        return String.format(Locale.ROOT, "%." + (digits - 1) + "e", v);
+    }
+}

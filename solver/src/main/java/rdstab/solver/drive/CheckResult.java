@@ -1,0 +1,28 @@
+package rdstab.solver.drive;
+
+import java.util.List;
+import java.util.Map;
+import rdstab.solver.assess.Assessment;
+import rdstab.solver.eigen.EigenPair;
+import rdstab.solver.energy.EnergyRates;
+import rdstab.solver.newton.BaseState;
+import rdstab.solver.setup.Problem;
+
+/**
+ * Everything one stability check found, with its evidence.
+ *
+ * @param problem          the discretized case
+ * @param base             the steady state with Newton's evidence
+ * @param baseNodal        nodal values of the base state, [field][node] (fixed values included)
+ * @param baseMax          largest nodal value per field
+ * @param modes            rightmost eigenpairs, rightmost first, each with its residual
+ * @param shift            the shift σ used by shift-invert
+ * @param rightmostCertified true when the returned set is guaranteed to contain the rightmost eigenvalues
+ * @param energy           energy-method rates
+ * @param assessment       verdict and what it means
+ * @param seconds          wall time per stage: "base", "spectrum", "energy"
+ */
+public record CheckResult(Problem problem, BaseState base, double[][] baseNodal, Map<String, Double> baseMax,
+                          List<EigenPair> modes, double shift, boolean rightmostCertified, EnergyRates energy,
+                          Assessment assessment, Map<String, Double> seconds) {
+}

@@ -1,0 +1,165 @@
+package rdstab.solver.drive;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.ejml.data.DMatrixSparseCSC;
+import org.ejml.sparse.csc.CommonOps_DSCC;
+import rdstab.mesh.assembly.Discretization;
+import rdstab.solver.assess.Assessment;
+import rdstab.solver.assess.SafetyCautions;
+import rdstab.solver.assess.Verdict;
+import rdstab.solver.eigen.EigenOptions;
+import rdstab.solver.eigen.EigenPair;
+import rdstab.solver.eigen.EigenSolvers;
+import rdstab.solver.eigen.Spectrum;
+import rdstab.solver.energy.EnergyAnalysis;
+import rdstab.solver.energy.EnergyRates;
+import rdstab.solver.error.ConvergenceException;
+import rdstab.solver.error.ConvergenceException.Reason;
+import rdstab.solver.model.AnalysisSpec;
+import rdstab.solver.model.Case;
+import rdstab.solver.newton.BaseState;
+import rdstab.solver.newton.DampedNewton;
+import rdstab.solver.setup.Problem;
+import rdstab.solver.setup.ProblemBuilder;
+
+/**
+ * One stability check: case → base state (damped Newton) → J, M → rightmost eigenpairs
+ * (shift-invert) → energy rates → assessment. The single-point driver every other driver reuses.
+ */
+public final class StabilityCheck {
+
+    private StabilityCheck() {
+    }
+
+    /** Runs a check from the case's own initial guess. */
+    public static CheckResult run(Case c) {
+        Problem p = ProblemBuilder.build(c);
+        return run(p, p.initial());
+    }
+
+    /**
+     * Runs a check from a given initial guess (warm start from a neighbouring point).
+     *
+     * @throws ConvergenceException NO_STEADY_STATE when Newton fails, EIGEN_NOT_CONVERGED when the leading
+     *         eigenpair is not trustworthy
+     */
+    public static CheckResult run(Problem p, double[] guess) {
+        Case c = p.theCase();
+        AnalysisSpec a = c.analysis();
+        Map<String, Double> seconds = new LinkedHashMap<>();
+        long t0 = System.nanoTime();
+        BaseState base = steadyState(p, guess);
+        long t1 = System.nanoTime();
+        seconds.put("base", (t1 - t0) * 1e-9);
+        Discretization d = p.full();
+        DMatrixSparseCSC j = d.jacobian(base.u());
+        DMatrixSparseCSC m = d.mass();
+        boolean symmetric = EnergyAnalysis.isSymmetric(j);
+        int k = Math.min(a.modes(), d.unknowns());
+        EigenOptions opts = new EigenOptions(k, a.shift(), symmetric, a.eigenTolerance(), 3000, 0);
+        Spectrum spectrum = EigenSolvers.solve(j, m, opts);
+        long t2 = System.nanoTime();
+        seconds.put("spectrum", (t2 - t1) * 1e-9);
+        List<String> warnings = new ArrayList<>();
+        List<EigenPair> modes = trusted(spectrum.pairs(), a.residualLimit(), warnings);
+        DMatrixSparseCSC t = p.transport().jacobian(base.u());
+        EnergyRates energy = EnergyAnalysis.compute(d, j, t, m);
+        seconds.put("energy", (System.nanoTime() - t2) * 1e-9);
+        if (!spectrum.certified()) {
+            warnings.add("the returned eigenvalues are the ones nearest the shift; an eigenvalue with a large imaginary "
+                    + "part further right cannot be ruled out by the certificate (raise --modes to widen the search)");
+        }
+        double[][] nodal = d.nodalValues(base.u());
+        Map<String, Double> max = new LinkedHashMap<>();
+        for (int f = 0; f < d.fieldCount(); f++) {
+            double mx = Double.NEGATIVE_INFINITY;
+            for (double v : nodal[f]) {
+                mx = Math.max(mx, v);
+            }
+            max.put(c.fields().get(f).name(), mx);
+        }
+        Assessment as = assess(c, d, modes, energy, CommonOps_DSCC.elementMaxAbs(j), m, warnings);
+        return new CheckResult(p, base, nodal, max, modes, spectrum.shift(), spectrum.certified(), energy, as, seconds);
+    }
+
+    /** Newton from the guess; failure becomes NO_STEADY_STATE with the reason kept in the message. */
+    public static BaseState steadyState(Problem p, double[] guess) {
+        AnalysisSpec a = p.theCase().analysis();
+        try {
+            return new DampedNewton(a.newtonTolerance(), a.newtonMaxSteps()).solve(p.full(), guess);
+        } catch (ConvergenceException e) {
+            throw new ConvergenceException(Reason.NO_STEADY_STATE, "no steady state found: " + e.getMessage()
+                    + ". Beyond a fold there is none; try a smaller value of the driving parameter, another initial guess, "
+                    + "or 'rdstab critical' to locate the limit", e.iterations(), e.lastResidual(), e);
+        }
+    }
+
+    private static List<EigenPair> trusted(List<EigenPair> pairs, double limit, List<String> warnings) {
+        List<EigenPair> out = new ArrayList<>();
+        for (EigenPair e : pairs) {
+            if (e.residual() <= limit) {
+                out.add(e);
+            } else if (out.isEmpty()) {
+                throw new ConvergenceException(Reason.EIGEN_NOT_CONVERGED, String.format(java.util.Locale.ROOT,
+                        "the rightmost eigenpair (%.6g%+.6gi) has residual %.2e above the limit %.1e; not reported",
+                        e.re(), e.im(), e.residual(), limit), -1, e.residual());
+            } else {
+                warnings.add(String.format(java.util.Locale.ROOT, "eigenpair %.6g%+.6gi dropped: residual %.2e above %.1e",
+                        e.re(), e.im(), e.residual(), limit));
+            }
+        }
+        return out;
+    }
+
+    static Assessment assess(Case c, Discretization d, List<EigenPair> modes, EnergyRates energy, double jNorm,
+                             DMatrixSparseCSC m, List<String> warnings) {
+        EigenPair lead = modes.get(0);
+        double growth = lead.re();
+        double mMin = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < m.numRows; i++) {
+            mMin = Math.min(mMin, m.get(i, i));
+        }
+        double eigenError = lead.residual() * jNorm * Math.sqrt(m.numRows) / mMin;
+        double band = Math.max(c.analysis().marginalBand(), eigenError);
+        Verdict v = growth > band ? Verdict.UNSTABLE : growth < -band ? Verdict.STABLE : Verdict.MARGINAL;
+        double efold = growth == 0 ? Double.POSITIVE_INFINITY : 1.0 / Math.abs(growth);
+        double[][] mode = d.nodalPerturbation(lead.vectorRe());
+        double[][] modeIm = d.nodalPerturbation(lead.vectorIm());
+        int bestF = 0;
+        int bestI = 0;
+        double best = -1;
+        for (int f = 0; f < mode.length; f++) {
+            for (int i = 0; i < mode[f].length; i++) {
+                double amp = Math.hypot(mode[f][i], modeIm[f][i]);
+                if (amp > best) {
+                    best = amp;
+                    bestF = f;
+                    bestI = i;
+                }
+            }
+        }
+        double[] peakX = new double[d.dimension()];
+        for (int dir = 0; dir < peakX.length; dir++) {
+            peakX[dir] = d.coordinate(bestI, dir);
+        }
+        String energyVerdict;
+        if (energy.numericalAbscissa() < 0) {
+            energyVerdict = "energy-stable: every disturbance decays from the start";
+        } else if (v == Verdict.STABLE) {
+            energyVerdict = "modally stable, transient growth possible";
+            warnings.add("the energy rate is positive while every mode decays: some disturbances grow for a while "
+                    + "before they decay (transient growth)");
+        } else {
+            energyVerdict = v == Verdict.UNSTABLE ? "unstable" : "marginal: the energy rate is not negative";
+        }
+        if (v == Verdict.MARGINAL) {
+            warnings.add("the growth rate is within its error band of zero: the case sits at (or very near) "
+                    + "its stability limit; this is not a margin of safety");
+        }
+        return new Assessment(v, growth, band, efold, lead.im(), c.fields().get(bestF).name(), peakX, energyVerdict,
+                List.copyOf(warnings), SafetyCautions.STANDARD);
+    }
+}

@@ -1,0 +1,112 @@
+package rdstab.solver.model;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import rdstab.solver.error.InputException;
+
+/**
+ * A validated, immutable stability case: geometry, mesh, named parameters, fields, boundary
+ * conditions and analysis options. Read one with {@link rdstab.solver.casefile.CaseReader}; change
+ * a parameter with {@link #withParameter}, which returns a new case.
+ *
+ * @param source      where it came from (file path), for messages
+ * @param title       one-line title
+ * @param about       free description (may be empty)
+ * @param shape       body shape
+ * @param from        inner coordinate (0 = symmetry centre for cylinder and sphere; left end of a slab)
+ * @param to          outer coordinate (surface of a cylinder or sphere; right end of a slab)
+ * @param fromY       lower y of a rectangle (null in 1D)
+ * @param toY         upper y of a rectangle (null in 1D)
+ * @param mesh        resolution
+ * @param parameters  named parameter values, in file order
+ * @param fields      the fields, in file order (unknown numbering follows it)
+ * @param boundaries  boundary part name → field name → condition
+ * @param analysis    analysis options
+ */
+public record Case(String source, String title, String about, Shape shape, Quantity from, Quantity to,
+                   Quantity fromY, Quantity toY, MeshSpec mesh,
+                   Map<String, Double> parameters, List<FieldSpec> fields,
+                   Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis) {
+
+    /** Coordinate names usable in formulas. */
+    public static final List<String> COORDINATES_1D = List.of("x");
+
+    public Case {
+        parameters = Collections.unmodifiableMap(new LinkedHashMap<>(parameters));
+        fields = List.copyOf(fields);
+        Map<String, Map<String, BoundarySpec>> b = new LinkedHashMap<>();
+        boundaries.forEach((k, v) -> b.put(k, Collections.unmodifiableMap(new LinkedHashMap<>(v))));
+        boundaries = Collections.unmodifiableMap(b);
+    }
+
+    /** Field names in order. */
+    public List<String> fieldNames() {
+        List<String> names = new ArrayList<>();
+        for (FieldSpec f : fields) {
+            names.add(f.name());
+        }
+        return names;
+    }
+
+    /** Coordinate names usable in formulas: x (and y in 2D); r is accepted as a synonym of x for radial shapes. */
+    public List<String> coordinateNames() {
+        if (shape.dimension() == 2) {
+            return List.of("x", "y");
+        }
+        return shape.radial() ? List.of("x", "r") : List.of("x");
+    }
+
+    /** Value of a parameter. */
+    public double parameter(String name) {
+        Double v = parameters.get(name);
+        if (v == null) {
+            throw unknownParameter(name, "command line");
+        }
+        return v;
+    }
+
+    /**
+     * A copy with one parameter changed.
+     *
+     * @throws InputException when the case has no such parameter or the value is not finite
+     */
+    public Case withParameter(String name, double value) {
+        if (!parameters.containsKey(name)) {
+            throw unknownParameter(name, "command line");
+        }
+        if (!Double.isFinite(value)) {
+            throw new InputException("command line", null, "parameter '" + name + "' must be a finite number, got " + value);
+        }
+        Map<String, Double> p = new LinkedHashMap<>(parameters);
+        p.put(name, value);
+        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, p, fields, boundaries, analysis);
+    }
+
+    /** A copy with other mesh settings. */
+    public Case withMesh(MeshSpec m) {
+        return new Case(source, title, about, shape, from, to, fromY, toY, m, parameters, fields, boundaries, analysis);
+    }
+
+    /** A copy with other analysis options. */
+    public Case withAnalysis(AnalysisSpec a) {
+        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, a);
+    }
+
+    private InputException unknownParameter(String name, String where) {
+        return new InputException(where, null, "the case " + source + " has no parameter '" + name
+                + "'; its parameters are " + (parameters.isEmpty() ? "(none)" : String.join(", ", parameters.keySet())));
+    }
+
+    /** Inner coordinate value at the current parameters. */
+    public double fromValue() {
+        return from.value(parameters);
+    }
+
+    /** Outer coordinate value at the current parameters. */
+    public double toValue() {
+        return to.value(parameters);
+    }
+}

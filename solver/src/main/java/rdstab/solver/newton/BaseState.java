@@ -1,0 +1,13 @@
+package rdstab.solver.newton;
+
+/**
+ * A steady solution ū with F(ū) = 0 and its evidence.
+ *
+ * @param u                 the unknown vector (fixed-value nodes excluded)
+ * @param iterations        Newton steps taken
+ * @param residual          final scaled residual ‖M⁻¹F(ū)‖∞ (see {@link DampedNewton})
+ * @param tolerance         the tolerance it was accepted at (after the round-off floor)
+ * @param residualHistory   scaled residual before each step and after the last
+ */
+public record BaseState(double[] u, int iterations, double residual, double tolerance, double[] residualHistory) {
+}
