@@ -29,8 +29,8 @@ final class Lexer {
         /** Plain-words description for error messages. */
         String describe() {
             switch (type) {
-                case NUMBER: return "number '" + text + "'";
-                case NAME: return "name '" + text + "'";
+                case NUMBER: return "number '" + shorten(text) + "'";
+                case NAME: return "name '" + shorten(text) + "'";
                 case END: return "end of text";
                 default: return "'" + text + "'";
             }
@@ -103,7 +103,7 @@ final class Lexer {
             }
             if (i >= s.length() || !isDigit(s.charAt(i))) {
                 throw new FormulaException(FormulaException.Kind.SYNTAX, mark,
-                        "number '" + s.substring(start, i) + "' has an exponent mark '" + s.charAt(mark)
+                        "number '" + shorten(s.substring(start, i)) + "' has an exponent mark '" + s.charAt(mark)
                                 + "' without digits; expected digits such as 1.5e-3");
             }
             while (i < s.length() && isDigit(s.charAt(i))) {
@@ -114,9 +114,14 @@ final class Lexer {
         double v = Double.parseDouble(lit);
         if (Double.isInfinite(v)) {
             throw new FormulaException(FormulaException.Kind.SYNTAX, start,
-                    "number '" + lit + "' is too large; expected a magnitude below about 1.8e308");
+                    "number '" + shorten(lit) + "' is too large; expected a magnitude below about 1.8e308");
         }
         return new Token(Type.NUMBER, lit, start, v);
+    }
+
+    /** @return the text, cut to at most 40 characters for messages */
+    static String shorten(String text) {
+        return text.length() <= 40 ? text : text.substring(0, 37) + "...";
     }
 
     private FormulaException badCharacter(int at) {

@@ -162,7 +162,7 @@ final class Parser {
         Op fn = Op.function(name.text);
         if (fn == null) {
             String what = name.text.equals(Formula.PI) ? "'pi' is a constant, not a function"
-                    : "unknown function '" + name.text + "'";
+                    : "unknown function '" + Lexer.shorten(name.text) + "'";
             throw new FormulaException(Kind.UNKNOWN_FUNCTION, name.pos, what + "; known functions: " + Op.functionList());
         }
         Token open = next();
