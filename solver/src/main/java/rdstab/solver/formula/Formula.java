@@ -93,7 +93,9 @@ public final class Formula {
 
     /**
      * @param constants values for some or all free names (other entries are ignored)
-     * @return the formula with those names replaced by numbers and constant parts folded
+     * @return the formula with those names replaced by numbers and every operation whose arguments
+     *         are all numbers computed (constant folding only, no algebraic rewriting such as 0*x -> 0,
+     *         so the values are bit for bit those of this formula)
      */
     public Formula substitute(Map<String, Double> constants) {
         Objects.requireNonNull(constants, "constants");
@@ -122,7 +124,8 @@ public final class Formula {
      * @param variables names read at evaluation time: {@code variables.get(i)} is read from {@code vars[i]};
      *                  no duplicates
      * @param constants values for every other free name (extra entries are ignored; variables win)
-     * @return the compiled formula, with constant parts folded
+     * @return the compiled formula, with constant parts folded (as in {@link #substitute}); its values
+     *         are bit for bit those of the formula as written
      * @throws FormulaException of kind {@link Kind#UNKNOWN_NAME} at the first occurrence of a name
      *                          that is neither a variable nor a constant
      */

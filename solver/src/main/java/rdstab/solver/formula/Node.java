@@ -74,23 +74,6 @@ final class Node {
         return false;
     }
 
-    /** Builds op(args) with simplification; the general entry point for rebuilt trees. */
-    static Node make(Op op, Node... a) {
-        if (allNumbers(a)) {
-            return fold(op, a);
-        }
-        switch (op) {
-            case NEG: return neg(a[0]);
-            case ADD: return add(a[0], a[1]);
-            case SUB: return sub(a[0], a[1]);
-            case MUL: return mul(a[0], a[1]);
-            case DIV: return div(a[0], a[1]);
-            case POW: return pow(a[0], a[1]);
-            case IFLE: return ifle(a[0], a[1], a[2], a[3]);
-            default: return fold(op, a);
-        }
-    }
-
     private static boolean allNumbers(Node... a) {
         for (Node n : a) {
             if (!n.isNum()) {
@@ -204,7 +187,10 @@ final class Node {
         return fold(Op.IFLE, a, b, p, q);
     }
 
-    /** @return the tree with names replaced by numbers from the map, simplified and folded */
+    /**
+     * @return the tree with names replaced by numbers from the map and every operation on numbers
+     *         only computed; no algebraic rewriting, so values stay exactly those of this tree
+     */
     Node substitute(Map<String, Double> constants) {
         if (op == Op.VAR) {
             Double v = constants.get(name);
@@ -216,7 +202,7 @@ final class Node {
         for (int i = 0; i < a.length; i++) {
             a[i] = args[i].substitute(constants);
         }
-        return make(op, a);
+        return fold(op, a);
     }
 
     @Override

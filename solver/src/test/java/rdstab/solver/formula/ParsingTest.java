@@ -92,9 +92,14 @@ class ParsingTest {
     @Test
     void substituteFoldsToConstants() {
         Formula f = Formula.parse("a*x + b^2");
-        Formula g = f.substitute(Map.of("a", 0.0, "b", 3.0));
+        Formula g = f.substitute(Map.of("a", 2.0, "b", 3.0, "x", 5.0));
         assertTrue(g.isConstant());
-        assertEquals(9.0, g.constantValue());
+        assertEquals(19.0, g.constantValue());
+        // folding only, no algebra: 0*x stays, so at x = infinity the value is NaN as written
+        Formula zero = f.substitute(Map.of("a", 0.0, "b", 3.0));
+        assertEquals(Set.of("x"), zero.names());
+        assertTrue(Double.isNaN(Eval.at(zero, Map.of("x", Double.POSITIVE_INFINITY))));
+        assertEquals(9.0, Eval.at(zero, Map.of("x", 1e300)));
         Formula h = f.substitute(Map.of("b", 2.0));
         assertEquals(Set.of("a", "x"), h.names());
         assertEquals(2 * 5 + 4.0, Eval.at(h, Map.of("a", 2.0, "x", 5.0)));
