@@ -76,7 +76,10 @@ public final class Formula {
         return names;
     }
 
-    /** @return whether the formula references the free name */
+    /**
+     * @param name a free name
+     * @return whether the formula references it ("pi" never counts)
+     */
     public boolean references(String name) {
         return names.contains(name);
     }
