@@ -1,0 +1,141 @@
+package rdstab.solver.eigen;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import org.ejml.data.DMatrixSparseCSC;
+import rdstab.solver.linear.SparseOps;
+
+/**
+ * Post-processing shared by all solvers: M-normalisation, independent residuals, ordering.
+ *
+ * <p>Residual: ρ = ‖J x − λ M x‖₂ / (‖J‖₁ ‖x‖₂) in complex arithmetic; when J = 0 the denominator
+ * uses ‖M‖₁ instead (so that ρ stays defined).
+ */
+final class EigenChecks {
+
+    private EigenChecks() {
+    }
+
+    /**
+     * One eigenvalue or one conjugate pair: λ = re + i·im with im ≥ 0 and eigenvector xr + i·xi; when
+     * im &gt; 0 the conjugate (re − i·im, xr − i·xi) is implied.
+     */
+    record Mode(double re, double im, double[] xr, double[] xi) {
+        int multiplicity() {
+            return im > 0 ? 2 : 1;
+        }
+    }
+
+    /** Rightmost first; among equal real parts, the larger |Im| first. */
+    static final Comparator<Mode> RIGHTMOST_FIRST =
+            Comparator.comparingDouble(Mode::re).reversed().thenComparing(Comparator.comparingDouble(Mode::im).reversed());
+
+    /**
+     * Sorts modes rightmost first and keeps the first modes until at least k eigenvalues are covered
+     * (a conjugate pair is never split, so k + 1 may be returned), each normalised and checked.
+     */
+    static List<EigenPair> finish(List<Mode> modes, int k, DMatrixSparseCSC j, DMatrixSparseCSC m) {
+        List<Mode> sorted = new ArrayList<>(modes);
+        sorted.sort(RIGHTMOST_FIRST);
+        double normJ = SparseOps.norm1(j);
+        double scale = normJ > 0 ? normJ : SparseOps.norm1(m);
+        List<EigenPair> out = new ArrayList<>();
+        for (Mode mode : sorted) {
+            if (out.size() >= k) {
+                break;
+            }
+            EigenPair p = check(mode.re(), mode.im(), mode.xr(), mode.xi(), j, m, scale);
+            out.add(p);
+            if (mode.im() > 0) {
+                out.add(new EigenPair(p.re(), -p.im(), p.vectorRe(), negate(p.vectorIm()), p.residual()));
+            }
+        }
+        return out;
+    }
+
+    /** Normalises x to unit M-norm (and fixes the phase so the largest component is real) and computes ρ. */
+    static EigenPair check(double re, double im, double[] xr0, double[] xi0, DMatrixSparseCSC j, DMatrixSparseCSC m,
+                           double scale) {
+        int n = xr0.length;
+        double[] xr = xr0.clone();
+        double[] xi = xi0 == null ? new double[n] : xi0.clone();
+        int big = 0;
+        double bigAbs = -1;
+        for (int i = 0; i < n; i++) {
+            double a = Math.hypot(xr[i], xi[i]);
+            if (a > bigAbs) {
+                bigAbs = a;
+                big = i;
+            }
+        }
+        if (bigAbs > 0) {
+            double c = xr[big] / bigAbs;
+            double s = -xi[big] / bigAbs;
+            for (int i = 0; i < n; i++) {
+                double r = xr[i] * c - xi[i] * s;
+                double q = xr[i] * s + xi[i] * c;
+                xr[i] = r;
+                xi[i] = q;
+            }
+            xi[big] = 0.0;
+        }
+        double[] mr = new double[n];
+        double[] mi = new double[n];
+        SparseOps.multiply(m, xr, mr);
+        SparseOps.multiply(m, xi, mi);
+        double mnorm2 = dot(xr, mr) + dot(xi, mi);
+        double inv = mnorm2 > 0 ? 1.0 / Math.sqrt(mnorm2) : 1.0;
+        for (int i = 0; i < n; i++) {
+            xr[i] *= inv;
+            xi[i] *= inv;
+            mr[i] *= inv;
+            mi[i] *= inv;
+        }
+        double[] jr = new double[n];
+        double[] ji = new double[n];
+        SparseOps.multiply(j, xr, jr);
+        SparseOps.multiply(j, xi, ji);
+        double res2 = 0.0;
+        double x2 = 0.0;
+        for (int i = 0; i < n; i++) {
+            double rr = jr[i] - (re * mr[i] - im * mi[i]);
+            double ri = ji[i] - (re * mi[i] + im * mr[i]);
+            res2 += rr * rr + ri * ri;
+            x2 += xr[i] * xr[i] + xi[i] * xi[i];
+        }
+        double denom = scale * Math.sqrt(x2);
+        double residual = denom > 0 ? Math.sqrt(res2) / denom : Math.sqrt(res2);
+        if (!Double.isFinite(re) || !Double.isFinite(im)) {
+            residual = Double.NaN;
+        }
+        return new EigenPair(re, im, xr, xi, residual);
+    }
+
+    static double dot(double[] a, double[] b) {
+        double s = 0.0;
+        for (int i = 0; i < a.length; i++) {
+            s += a[i] * b[i];
+        }
+        return s;
+    }
+
+    static double[] negate(double[] a) {
+        double[] b = new double[a.length];
+        for (int i = 0; i < a.length; i++) {
+            b[i] = -a[i];
+        }
+        return b;
+    }
+
+    /** Argument checks shared by the solvers. */
+    static void requireProblem(DMatrixSparseCSC j, DMatrixSparseCSC m) {
+        if (j.numRows != j.numCols || m.numRows != m.numCols || j.numCols != m.numCols) {
+            throw new IllegalArgumentException("J and M must be square and of one size, got " + j.numRows + "x"
+                    + j.numCols + " and " + m.numRows + "x" + m.numCols);
+        }
+        if (j.numCols == 0) {
+            throw new IllegalArgumentException("empty problem (n = 0)");
+        }
+    }
+}

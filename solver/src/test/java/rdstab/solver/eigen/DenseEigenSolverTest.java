@@ -1,0 +1,8 @@
+package rdstab.solver.eigen;
+
+class DenseEigenSolverTest extends EigenSolverContractTest {
+    @Override
+    EigenSolver solver() {
+        return new DenseEigenSolver();
+    }
+}

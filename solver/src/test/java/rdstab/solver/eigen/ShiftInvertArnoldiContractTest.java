@@ -1,0 +1,8 @@
+package rdstab.solver.eigen;
+
+class ShiftInvertArnoldiContractTest extends EigenSolverContractTest {
+    @Override
+    EigenSolver solver() {
+        return new ShiftInvertArnoldi();
+    }
+}
