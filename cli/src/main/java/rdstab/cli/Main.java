@@ -36,6 +36,17 @@ public final class Main implements Runnable {
     /** Exit status: file failure. */
     public static final int IO = 4;
 
+    /**
+     * dev.ludovic.netlib logs a warning each time the native ARPACK is not installed and it falls back to
+     * its pure-Java build; that is expected and not the user's concern (both give the same answers).
+     * Held in a static field so the logger configuration is not garbage-collected.
+     */
+    private static final java.util.logging.Logger NETLIB_LOG = java.util.logging.Logger.getLogger("dev.ludovic.netlib");
+
+    static {
+        NETLIB_LOG.setLevel(java.util.logging.Level.SEVERE);
+    }
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 

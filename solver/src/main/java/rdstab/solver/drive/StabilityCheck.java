@@ -5,11 +5,11 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.ejml.data.DMatrixSparseCSC;
-import org.ejml.sparse.csc.CommonOps_DSCC;
 import rdstab.mesh.assembly.Discretization;
 import rdstab.solver.assess.Assessment;
 import rdstab.solver.assess.SafetyCautions;
 import rdstab.solver.assess.Verdict;
+import rdstab.solver.eigen.EigenChecks;
 import rdstab.solver.eigen.EigenOptions;
 import rdstab.solver.eigen.EigenPair;
 import rdstab.solver.eigen.EigenSolvers;
@@ -68,7 +68,7 @@ public final class StabilityCheck {
         DMatrixSparseCSC t = p.transport().jacobian(base.u());
         EnergyRates energy = EnergyAnalysis.compute(d, j, t, m);
         seconds.put("energy", (System.nanoTime() - t2) * 1e-9);
-        if (!spectrum.certified()) {
+        if (!spectrum.rightmostCertified()) {
             warnings.add("the returned eigenvalues are the ones nearest the shift; an eigenvalue with a large imaginary "
                     + "part further right cannot be ruled out by the certificate (raise --modes to widen the search)");
         }
@@ -81,8 +81,8 @@ public final class StabilityCheck {
             }
             max.put(c.fields().get(f).name(), mx);
         }
-        Assessment as = assess(c, d, modes, energy, CommonOps_DSCC.elementMaxAbs(j), m, warnings);
-        return new CheckResult(p, base, nodal, max, modes, spectrum.shift(), spectrum.certified(), energy, as, seconds);
+        Assessment as = assess(c, d, modes, energy, j, m, warnings);
+        return new CheckResult(p, base, nodal, max, modes, spectrum.shift(), spectrum.rightmostCertified(), energy, as, seconds);
     }
 
     /** Newton from the guess; failure becomes NO_STEADY_STATE with the reason kept in the message. */
@@ -114,15 +114,11 @@ public final class StabilityCheck {
         return out;
     }
 
-    static Assessment assess(Case c, Discretization d, List<EigenPair> modes, EnergyRates energy, double jNorm,
+    static Assessment assess(Case c, Discretization d, List<EigenPair> modes, EnergyRates energy, DMatrixSparseCSC j,
                              DMatrixSparseCSC m, List<String> warnings) {
         EigenPair lead = modes.get(0);
         double growth = lead.re();
-        double mMin = Double.POSITIVE_INFINITY;
-        for (int i = 0; i < m.numRows; i++) {
-            mMin = Math.min(mMin, m.get(i, i));
-        }
-        double eigenError = lead.residual() * jNorm * Math.sqrt(m.numRows) / mMin;
+        double eigenError = EigenChecks.errorBound(lead, j, m);
         double band = Math.max(c.analysis().marginalBand(), eigenError);
         Verdict v = growth > band ? Verdict.UNSTABLE : growth < -band ? Verdict.STABLE : Verdict.MARGINAL;
         double efold = growth == 0 ? Double.POSITIVE_INFINITY : 1.0 / Math.abs(growth);

@@ -12,7 +12,7 @@ import rdstab.solver.linear.SparseOps;
  * <p>Residual: ρ = ‖J x − λ M x‖₂ / (‖J‖₁ ‖x‖₂) in complex arithmetic; when J = 0 the denominator
  * uses ‖M‖₁ instead (so that ρ stays defined).
  */
-final class EigenChecks {
+public final class EigenChecks {
 
     private EigenChecks() {
     }
@@ -137,5 +137,40 @@ final class EigenChecks {
         if (j.numCols == 0) {
             throw new IllegalArgumentException("empty problem (n = 0)");
         }
+    }
+
+    /**
+     * Error bound of an eigenvalue from its residual in the energy norm:
+     * η = ‖M^{-1/2}(Jx − λMx)‖₂ / ‖M^{1/2}x‖₂ with M replaced by its row sums (exact for diagonal M).
+     * For a self-adjoint pencil some eigenvalue lies within η of λ (Krylov–Bogolyubov / Weinstein bound);
+     * for a non-normal operator η is a first-order estimate only.
+     */
+    public static double errorBound(EigenPair e, DMatrixSparseCSC j, DMatrixSparseCSC m) {
+        int n = j.numRows;
+        double[] w = new double[n];
+        for (int c = 0; c < m.numCols; c++) {
+            for (int p = m.col_idx[c]; p < m.col_idx[c + 1]; p++) {
+                w[m.nz_rows[p]] += m.nz_values[p];
+            }
+        }
+        double[] jr = new double[n];
+        double[] ji = new double[n];
+        for (int c = 0; c < n; c++) {
+            for (int p = j.col_idx[c]; p < j.col_idx[c + 1]; p++) {
+                jr[j.nz_rows[p]] += j.nz_values[p] * e.vectorRe()[c];
+                ji[j.nz_rows[p]] += j.nz_values[p] * e.vectorIm()[c];
+            }
+        }
+        double num = 0;
+        double den = 0;
+        for (int i = 0; i < n; i++) {
+            double xr = e.vectorRe()[i];
+            double xi = e.vectorIm()[i];
+            double rr = jr[i] - w[i] * (e.re() * xr - e.im() * xi);
+            double ri = ji[i] - w[i] * (e.re() * xi + e.im() * xr);
+            num += (rr * rr + ri * ri) / w[i];
+            den += w[i] * (xr * xr + xi * xi);
+        }
+        return Math.sqrt(num / den);
     }
 }

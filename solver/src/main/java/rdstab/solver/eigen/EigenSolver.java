@@ -19,4 +19,9 @@ public interface EigenSolver {
      *         (reason EIGEN_NOT_CONVERGED) or the shift is singular and cannot be moved (SINGULAR_SHIFT)
      */
     List<EigenPair> rightmost(DMatrixSparseCSC j, DMatrixSparseCSC m, EigenOptions options);
+
+    /**
+     * Same as {@link #rightmost} with the evidence: shift used, counts, certificate, timings.
+     */
+    Spectrum solve(DMatrixSparseCSC j, DMatrixSparseCSC m, EigenOptions options);
 }

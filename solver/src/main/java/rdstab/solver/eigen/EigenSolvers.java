@@ -18,6 +18,11 @@ public final class EigenSolvers {
         return options.symmetric() ? new ShiftInvertLanczos() : new ShiftInvertArnoldi();
     }
 
+    /** Solves J x = λ M x for the rightmost eigenpairs with the solver {@link #create} picks. */
+    public static Spectrum solve(org.ejml.data.DMatrixSparseCSC j, org.ejml.data.DMatrixSparseCSC m, EigenOptions options) {
+        return create(options, j.numRows).solve(j, m, options);
+    }
+
     /** Name of the ARPACK implementation that loads in this JVM (f2j pure Java or native JNI). */
     public static String arpackImplementation() {
         return ArpackSupport.implementationName();

@@ -111,7 +111,7 @@ public final class DampedNewton {
 
     private static SparseFactorization factor(DMatrixSparseCSC j, int it, double rho) {
         try {
-            return Factorizations.lu(j);
+            return Factorizations.factor(j, false, Factorizations.defaultOrdering());
         } catch (ConvergenceException e) {
             throw new ConvergenceException(Reason.SINGULAR_SHIFT, "the Jacobian is singular at Newton step " + it
                     + " (a fold or a branch point of the steady states is near)", it, rho, e);

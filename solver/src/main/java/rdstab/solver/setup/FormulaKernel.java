@@ -98,7 +98,9 @@ public final class FormulaKernel implements PointKernel {
         int n = fieldNames.size();
         System.arraycopy(u, 0, vars, 0, n);
         vars[n] = x[0];
-        vars[n + 1] = dim == 2 ? x[1] : x[0];
+        if (vars.length > n + 1) {
+            vars[n + 1] = dim == 2 ? x[1] : x[0];
+        }
     }
 
     @Override
@@ -132,7 +134,9 @@ public final class FormulaKernel implements PointKernel {
         }
         Arrays.fill(vars, 0.0);
         vars[fieldNames.size()] = x[0];
-        vars[fieldNames.size() + 1] = dim == 2 ? x[1] : x[0];
+        if (vars.length > fieldNames.size() + 1) {
+            vars[fieldNames.size() + 1] = dim == 2 ? x[1] : x[0];
+        }
         return drift[field].evaluate(vars);
     }
 

@@ -124,7 +124,9 @@ public final class ProblemBuilder {
             CompiledFormula g = c.fields().get(f).initial().compile(vars, c.parameters());
             for (int i = 0; i < d.nodes(); i++) {
                 slot[0] = d.coordinate(i, 0);
-                slot[1] = d.dimension() == 2 ? d.coordinate(i, 1) : slot[0];
+                if (slot.length > 1) {
+                    slot[1] = d.dimension() == 2 ? d.coordinate(i, 1) : slot[0];
+                }
                 nodal[f][i] = g.evaluate(slot);
                 if (!Double.isFinite(nodal[f][i])) {
                     throw new InputException(c.source(), c.fields().get(f).placeOf("initial"), "the initial guess of field '"
