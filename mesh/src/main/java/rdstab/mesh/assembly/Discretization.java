@@ -69,4 +69,17 @@ public interface Discretization {
 
     /** Volume (weight) associated with each node, for integrals: ∫ g ≈ Σ w_i g_i. */
     double[] nodeWeights();
+
+    /**
+     * The mesh cells as lists of node indices, for writers of mesh files (VTK) and plots: 2 nodes per cell
+     * (line segments) in 1D, 3 (triangles, counter-clockwise) or 4 (quadrilaterals, counter-clockwise) in 2D.
+     * The default gives consecutive segments, right for 1D grids numbered along the coordinate.
+     */
+    default int[][] cells() {
+        int[][] c = new int[Math.max(nodes() - 1, 0)][];
+        for (int i = 0; i + 1 < nodes(); i++) {
+            c[i] = new int[] {i, i + 1};
+        }
+        return c;
+    }
 }
