@@ -18,7 +18,9 @@ public final class CaseOptions {
     Path caseFile;
 
     @Option(names = "--set", paramLabel = "NAME=VALUE",
-            description = "Override a parameter of the case without editing the file (repeatable), e.g. --set delta=0.8.")
+            description = {"Override a parameter of the case without editing the file (repeatable), e.g. --set delta=0.8.",
+                "A value may carry a unit when the parameter has one: --set Ta=40degC, --set L=0.3m;",
+                "a plain number is taken in the unit the case gave the parameter in."})
     List<String> sets = new ArrayList<>();
 
     @Option(names = "--cells", paramLabel = "N",
@@ -43,12 +45,7 @@ public final class CaseOptions {
             }
             String name = s.substring(0, eq).trim();
             String text = s.substring(eq + 1).trim();
-            double v;
-            try {
-                v = Double.parseDouble(text);
-            } catch (NumberFormatException e) {
-                throw new InputException("command line", "--set " + s, "the value of '" + name + "' must be a number, found '" + text + "'");
-            }
+            double v = c.parseValue(name, text);
             c = c.withParameter(name, v);
         }
         if (cells != null) {

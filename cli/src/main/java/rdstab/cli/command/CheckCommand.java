@@ -13,6 +13,7 @@ import rdstab.cli.report.ResultJson;
 import rdstab.cli.report.TextReport;
 import rdstab.solver.drive.CheckResult;
 import rdstab.solver.drive.StabilityCheck;
+import rdstab.solver.error.ConvergenceException;
 import rdstab.solver.model.Case;
 
 /** rdstab check: one parameter point, the full report. */
@@ -54,8 +55,16 @@ public final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Case c = caseOptions.load();
-        CheckResult r = StabilityCheck.run(c);
         PrintWriter w = spec.commandLine().getOut();
+        CheckResult r;
+        try {
+            r = StabilityCheck.run(c);
+        } catch (ConvergenceException e) {
+            if (!json && e.reason() == ConvergenceException.Reason.NO_STEADY_STATE) {
+                TextReport.writeNoSteadyState(c, w);
+            }
+            throw e;
+        }
         if (json) {
             w.println(ResultJson.toJson(r));
         } else {

@@ -85,6 +85,9 @@ public final class ResultJson {
         m.put("rightmost_certified", r.rightmostCertified());
         m.put("cells", r.problem().theCase().mesh().cells());
         m.put("warnings", a.warnings());
+        if (PhysicalTerms.applies(r)) {
+            m.put("physical", PhysicalTerms.toMap(r));
+        }
         return m;
     }
 

@@ -24,7 +24,7 @@ public final class TextReport {
         Assessment a = r.assessment();
         w.println(c.title());
         w.println("case " + c.source() + " | " + c.shape().word() + ", " + c.mesh().cells() + " cells, "
-                + r.problem().full().unknowns() + " unknowns | " + parameters(c.parameters()));
+                + r.problem().full().unknowns() + " unknowns | " + parameters(c));
         w.println();
         w.println("VERDICT: " + a.verdict().word().toUpperCase(Locale.ROOT) + " — " + meaning(a.verdict()));
         w.printf(Locale.ROOT, "  growth rate      %s per unit time (undecided within ±%.1e)%n", sig(a.growthRate(), 8), a.band());
@@ -39,6 +39,9 @@ public final class TextReport {
         w.printf(Locale.ROOT, "  leading mode     largest in field %s at %s%n", a.peakField(), coords(a.peakX()));
         w.println("  energy method    " + a.energyVerdict());
         w.println();
+        if (PhysicalTerms.applies(r)) {
+            PhysicalTerms.write(r, w);
+        }
         w.printf(Locale.ROOT, "Base state (damped Newton: %d steps, residual %.2e, accepted at %.2e)%n",
                 r.base().iterations(), r.base().residual(), r.base().tolerance());
         for (Map.Entry<String, Double> e : r.baseMax().entrySet()) {
@@ -75,6 +78,24 @@ public final class TextReport {
         w.flush();
     }
 
+    /**
+     * What is printed on stdout when no steady state exists (the error line itself goes to stderr):
+     * for a self-heating body this is the runaway answer, so the cautions are printed with it.
+     */
+    public static void writeNoSteadyState(Case c, PrintWriter w) {
+        w.println(c.title());
+        w.println("case " + c.source() + " | " + c.shape().word() + ", " + c.mesh().cells() + " cells | " + parameters(c));
+        w.println();
+        w.println("VERDICT: NO STEADY STATE FOUND — heat or species production cannot be balanced at these values;");
+        w.println("  for a self-heating body this means thermal runaway is expected (see the reason on stderr).");
+        w.println();
+        w.println("Cautions");
+        for (String s : rdstab.solver.assess.SafetyCautions.STANDARD) {
+            w.println("  - " + s);
+        }
+        w.flush();
+    }
+
     static String meaning(Verdict v) {
         return switch (v) {
             case STABLE -> "small disturbances die out";
@@ -83,12 +104,15 @@ public final class TextReport {
         };
     }
 
-    static String parameters(Map<String, Double> p) {
-        if (p.isEmpty()) {
+    static String parameters(Case c) {
+        if (c.parameters().isEmpty()) {
             return "no parameters";
         }
         List<String> parts = new ArrayList<>();
-        p.forEach((k, v) -> parts.add(k + " = " + sig(v, 6)));
+        for (String k : c.parameters().keySet()) {
+            String u = c.unitText(k);
+            parts.add(k + " = " + sig(c.displayValue(k), 6) + (u.isEmpty() ? "" : " " + u));
+        }
         return String.join(", ", parts);
     }
 

@@ -25,8 +25,10 @@ import rdstab.solver.model.BoundarySpec;
 import rdstab.solver.model.Case;
 import rdstab.solver.model.FieldSpec;
 import rdstab.solver.model.MeshSpec;
+import rdstab.solver.model.PhysicalInputs;
 import rdstab.solver.model.Quantity;
 import rdstab.solver.model.Shape;
+import rdstab.solver.units.QuantityParser;
 
 /**
  * Reads a YAML case file into a validated {@link Case}. The format is documented in
@@ -47,8 +49,8 @@ public final class CaseReader {
     /** Largest cell count per direction. */
     public static final int MAX_CELLS = 4_000_000;
 
-    private static final Set<String> TOP = Set.of("title", "about", "geometry", "mesh", "parameters", "fields",
-            "boundaries", "analysis");
+    private static final Set<String> TOP = new java.util.LinkedHashSet<>(List.of("title", "about", "geometry", "mesh",
+            "parameters", "derived", "self-heating", "fields", "boundaries", "analysis"));
     private static final Set<String> GEOMETRY = Set.of("shape", "from", "to", "y-from", "y-to");
     private static final Set<String> MESH = Set.of("cells", "cells-y", "stretch");
     private static final Set<String> STRETCH = Set.of("toward", "strength");
@@ -111,6 +113,8 @@ public final class CaseReader {
         private final CaseNode root;
         private final String source;
         private final Map<String, Double> parameters = new LinkedHashMap<>();
+        private final Map<String, javax.measure.Unit<?>> units = new LinkedHashMap<>();
+        private final Map<String, Formula> derived = new LinkedHashMap<>();
 
         Reading(CaseNode root) {
             this.root = root;
@@ -131,8 +135,15 @@ public final class CaseReader {
             if (shape == null) {
                 throw shapeNode.error("unknown shape '" + shapeNode.text() + "'; expected slab, cylinder, sphere or rectangle");
             }
+            SelfHeatingSection.Generated model = null;
+            if (top.containsKey("self-heating")) {
+                model = selfHeating(top, shape, g);
+            }
+            if (top.containsKey("derived")) {
+                readDerived(top.get("derived"));
+            }
             Quantity from = g.containsKey("from") ? quantity(g.get("from")) : Quantity.of(0, geo.place());
-            Quantity to = quantity(require(geo, g, "to"));
+            Quantity to = model != null ? Quantity.of(1, geo.place()) : quantity(require(geo, g, "to"));
             Quantity fromY = null;
             Quantity toY = null;
             if (shape.dimension() == 2) {
@@ -142,12 +153,58 @@ public final class CaseReader {
                 throw (g.containsKey("y-to") ? g.get("y-to") : g.get("y-from")).error("y-from / y-to apply to 2D shapes only");
             }
             checkExtent(shape, from, to, geo);
-            MeshSpec mesh = readMesh(require(root, top, "mesh"), shape);
-            List<FieldSpec> fields = readFields(require(root, top, "fields"), shape);
-            Map<String, Map<String, BoundarySpec>> bcs = readBoundaries(require(root, top, "boundaries"), shape,
-                    from.value(parameters) == 0.0, fields);
+            MeshSpec mesh = model != null && !top.containsKey("mesh") ? new MeshSpec(200, 0, "none", 0)
+                    : readMesh(require(root, top, "mesh"), shape);
+            List<FieldSpec> fields = model != null ? model.fields() : readFields(require(root, top, "fields"), shape);
+            Map<String, Map<String, BoundarySpec>> bcs = model != null ? model.boundaries()
+                    : readBoundaries(require(root, top, "boundaries"), shape, from.value(parameters) == 0.0, fields);
             AnalysisSpec analysis = top.containsKey("analysis") ? readAnalysis(top.get("analysis")) : AnalysisSpec.defaults();
-            return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, bcs, analysis);
+            PhysicalInputs physical = new PhysicalInputs(units, derived, model == null ? null : model.model());
+            return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, bcs, analysis, physical);
+        }
+
+        private SelfHeatingSection.Generated selfHeating(Map<String, CaseNode> top, Shape shape, Map<String, CaseNode> g) {
+            CaseNode node = top.get("self-heating");
+            for (String k : List.of("fields", "boundaries")) {
+                if (top.containsKey(k)) {
+                    throw top.get(k).error("a self-heating case generates its field and boundary conditions; remove '" + k + "'");
+                }
+            }
+            if (g.containsKey("from") || g.containsKey("to")) {
+                throw node.error("a self-heating case takes its size from 'size' (half-thickness or radius); remove geometry from/to");
+            }
+            if (shape.dimension() != 1) {
+                throw node.error("the self-heating model is for a slab, cylinder or sphere, found '" + shape.word() + "'");
+            }
+            SelfHeatingSection.Generated m = SelfHeatingSection.read(node, shape);
+            for (String name : m.parameters().keySet()) {
+                if (parameters.containsKey(name)) {
+                    throw node.error("parameter '" + name + "' is set by the self-heating section; remove it from 'parameters'");
+                }
+            }
+            parameters.putAll(m.parameters());
+            units.putAll(m.units());
+            for (Map.Entry<String, Formula> e : m.derived().entrySet()) {
+                derived.put(e.getKey(), e.getValue());
+                parameters.put(e.getKey(), e.getValue().substitute(parameters).constantValue());
+            }
+            return m;
+        }
+
+        private void readDerived(CaseNode node) {
+            for (Map.Entry<String, CaseNode> e : node.entries().entrySet()) {
+                checkName(e.getKey(), e.getValue(), "derived parameter");
+                if (parameters.containsKey(e.getKey())) {
+                    throw e.getValue().error("derived parameter '" + e.getKey() + "' is already a parameter");
+                }
+                Formula f = formula(e.getValue(), parameters.keySet(), new LinkedHashMap<>(), "derived");
+                double v = f.substitute(parameters).constantValue();
+                if (!Double.isFinite(v)) {
+                    throw e.getValue().error("derived parameter '" + e.getKey() + "' evaluates to " + v);
+                }
+                derived.put(e.getKey(), f);
+                parameters.put(e.getKey(), v);
+            }
         }
 
         private CaseNode require(CaseNode parent, Map<String, CaseNode> entries, String key) {
@@ -163,17 +220,22 @@ public final class CaseReader {
                 checkName(e.getKey(), e.getValue(), "parameter");
                 CaseNode v = e.getValue();
                 if (!v.isScalar()) {
-                    throw v.error("parameter '" + e.getKey() + "' must be a number");
+                    throw v.error("parameter '" + e.getKey() + "' must be a number (optionally with a unit, e.g. '25 degC')");
                 }
+                QuantityParser.Parsed q;
                 try {
-                    double d = Double.parseDouble(v.text().trim());
-                    if (!Double.isFinite(d)) {
-                        throw v.error("parameter '" + e.getKey() + "' must be a finite number, found '" + v.text() + "'");
-                    }
-                    parameters.put(e.getKey(), d);
-                } catch (NumberFormatException ex) {
-                    throw v.error("parameter '" + e.getKey() + "' must be a number, found '" + v.text() + "'");
+                    q = QuantityParser.parse(v.text());
+                } catch (IllegalArgumentException ex) {
+                    throw v.error("parameter '" + e.getKey() + "' must be a number optionally followed by a unit; "
+                            + ex.getMessage());
                 }
+                if (q.hasUnit()) {
+                    if (QuantityParser.sameDimension(q.unit(), QuantityParser.kelvin()) && q.si() <= 0) {
+                        throw v.error("parameter '" + e.getKey() + "' = " + v.text().trim() + " is at or below absolute zero");
+                    }
+                    units.put(e.getKey(), q.unit());
+                }
+                parameters.put(e.getKey(), q.si());
             }
         }
 

@@ -5,7 +5,9 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import javax.measure.Unit;
 import rdstab.solver.error.InputException;
+import rdstab.solver.units.QuantityParser;
 
 /**
  * A validated, immutable stability case: geometry, mesh, named parameters, fields, boundary
@@ -25,11 +27,20 @@ import rdstab.solver.error.InputException;
  * @param fields      the fields, in file order (unknown numbering follows it)
  * @param boundaries  boundary part name → field name → condition
  * @param analysis    analysis options
+ * @param physical    parameter units, derived parameters and the physical self-heating model (if any)
  */
 public record Case(String source, String title, String about, Shape shape, Quantity from, Quantity to,
                    Quantity fromY, Quantity toY, MeshSpec mesh,
                    Map<String, Double> parameters, List<FieldSpec> fields,
-                   Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis) {
+                   Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis, PhysicalInputs physical) {
+
+    /** A case without units or derived parameters. */
+    public Case(String source, String title, String about, Shape shape, Quantity from, Quantity to,
+                Quantity fromY, Quantity toY, MeshSpec mesh, Map<String, Double> parameters, List<FieldSpec> fields,
+                Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis) {
+        this(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, analysis,
+                PhysicalInputs.none());
+    }
 
     /** Coordinate names usable in formulas. */
     public static final List<String> COORDINATES_1D = List.of("x");
@@ -40,6 +51,7 @@ public record Case(String source, String title, String about, Shape shape, Quant
         Map<String, Map<String, BoundarySpec>> b = new LinkedHashMap<>();
         boundaries.forEach((k, v) -> b.put(k, Collections.unmodifiableMap(new LinkedHashMap<>(v))));
         boundaries = Collections.unmodifiableMap(b);
+        physical = physical == null ? PhysicalInputs.none() : physical;
     }
 
     /** Field names in order. */
@@ -74,25 +86,82 @@ public record Case(String source, String title, String about, Shape shape, Quant
      * @throws InputException when the case has no such parameter or the value is not finite
      */
     public Case withParameter(String name, double value) {
+        if (physical.derived().containsKey(name)) {
+            throw new InputException("command line", null, "parameter '" + name + "' is derived from others ("
+                    + physical.derived().get(name) + "); change those instead");
+        }
         if (!parameters.containsKey(name)) {
             throw unknownParameter(name, "command line");
         }
         if (!Double.isFinite(value)) {
             throw new InputException("command line", null, "parameter '" + name + "' must be a finite number, got " + value);
         }
-        Map<String, Double> p = new LinkedHashMap<>(parameters);
+        Unit<?> u = physical.units().get(name);
+        if (u != null && QuantityParser.sameDimension(u, QuantityParser.kelvin()) && value <= 0) {
+            throw new InputException("command line", null, "parameter '" + name + "' is an absolute temperature; "
+                    + QuantityParser.fromSi(value, u) + " " + QuantityParser.display(u) + " is at or below absolute zero");
+        }
+        Map<String, Double> p = new LinkedHashMap<>();
+        parameters.forEach((k, v) -> {
+            if (!physical.derived().containsKey(k)) {
+                p.put(k, v);
+            }
+        });
         p.put(name, value);
-        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, p, fields, boundaries, analysis);
+        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, physical.withDerived(p), fields, boundaries,
+                analysis, physical);
+    }
+
+    /**
+     * Reads a value for a parameter as typed on the command line: a plain number is taken in the unit the
+     * parameter was given in (SI when none); a number with a unit ("40 degC", "0.3 m") is converted to SI
+     * after checking that its dimension matches.
+     */
+    public double parseValue(String name, String text) {
+        if (!parameters.containsKey(name)) {
+            throw unknownParameter(name, "command line");
+        }
+        QuantityParser.Parsed q;
+        try {
+            q = QuantityParser.parse(text);
+        } catch (IllegalArgumentException e) {
+            throw new InputException("command line", name, e.getMessage());
+        }
+        Unit<?> declared = physical.units().get(name);
+        if (!q.hasUnit()) {
+            return declared == null ? q.value() : QuantityParser.toSi(q.value(), declared);
+        }
+        if (declared == null) {
+            throw new InputException("command line", name, "parameter '" + name + "' was given without a unit in the case; "
+                    + "give a plain number, found '" + text + "'");
+        }
+        if (!QuantityParser.sameDimension(declared, q.unit())) {
+            throw new InputException("command line", name, "'" + text + "' has dimension " + QuantityParser.dimensionText(q.unit())
+                    + " but parameter '" + name + "' has dimension " + QuantityParser.dimensionText(declared));
+        }
+        return q.si();
+    }
+
+    /** A parameter's value in the unit it was given in (the SI value when it has none). */
+    public double displayValue(String name) {
+        Unit<?> u = physical.units().get(name);
+        return u == null ? parameter(name) : QuantityParser.fromSi(parameter(name), u);
+    }
+
+    /** The unit a parameter was given in, as text ("" when none). */
+    public String unitText(String name) {
+        Unit<?> u = physical.units().get(name);
+        return u == null ? "" : QuantityParser.display(u);
     }
 
     /** A copy with other mesh settings. */
     public Case withMesh(MeshSpec m) {
-        return new Case(source, title, about, shape, from, to, fromY, toY, m, parameters, fields, boundaries, analysis);
+        return new Case(source, title, about, shape, from, to, fromY, toY, m, parameters, fields, boundaries, analysis, physical);
     }
 
     /** A copy with other analysis options. */
     public Case withAnalysis(AnalysisSpec a) {
-        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, a);
+        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, a, physical);
     }
 
     private InputException unknownParameter(String name, String where) {
