@@ -22,6 +22,7 @@ import rdstab.solver.model.AnalysisSpec;
 import rdstab.solver.model.Case;
 import rdstab.solver.newton.BaseState;
 import rdstab.solver.newton.DampedNewton;
+import rdstab.solver.newton.SourceHomotopy;
 import rdstab.solver.setup.Problem;
 import rdstab.solver.setup.ProblemBuilder;
 
@@ -68,6 +69,10 @@ public final class StabilityCheck {
         DMatrixSparseCSC t = p.transport().jacobian(base.u());
         EnergyRates energy = EnergyAnalysis.compute(d, j, t, m);
         seconds.put("energy", (System.nanoTime() - t2) * 1e-9);
+        if (!"newton".equals(base.route())) {
+            warnings.add("Newton's method failed from the case's initial guess; the base state was reached by "
+                    + "continuation in the source strength from the source-free state (the branch connected to it)");
+        }
         if (!spectrum.rightmostCertified()) {
             warnings.add("the returned eigenvalues are the ones nearest the shift; an eigenvalue with a large imaginary "
                     + "part further right cannot be ruled out by the certificate (raise --modes to widen the search)");
@@ -88,12 +93,17 @@ public final class StabilityCheck {
     /** Newton from the guess; failure becomes NO_STEADY_STATE with the reason kept in the message. */
     public static BaseState steadyState(Problem p, double[] guess) {
         AnalysisSpec a = p.theCase().analysis();
+        DampedNewton newton = new DampedNewton(a.newtonTolerance(), a.newtonMaxSteps());
         try {
-            return new DampedNewton(a.newtonTolerance(), a.newtonMaxSteps()).solve(p.full(), guess);
-        } catch (ConvergenceException e) {
-            throw new ConvergenceException(Reason.NO_STEADY_STATE, "no steady state found: " + e.getMessage()
-                    + ". Beyond a fold there is none; try a smaller value of the driving parameter, another initial guess, "
-                    + "or 'rdstab critical' to locate the limit", e.iterations(), e.lastResidual(), e);
+            return newton.solve(p.full(), guess);
+        } catch (ConvergenceException direct) {
+            try {
+                return SourceHomotopy.solve(p.full(), p.transport(), guess, newton);
+            } catch (ConvergenceException e) {
+                throw new ConvergenceException(Reason.NO_STEADY_STATE, "no steady state found: " + direct.getMessage()
+                        + "; then " + e.getMessage() + ". Beyond a fold there is none; try a smaller value of the driving "
+                        + "parameter or 'rdstab critical' to locate the limit", e.iterations(), e.lastResidual(), e);
+            }
         }
     }
 
