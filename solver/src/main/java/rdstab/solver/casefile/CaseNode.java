@@ -74,6 +74,9 @@ final class CaseNode {
                 throw new CaseNode(t.getKeyNode(), path, source).error("keys must be plain words");
             }
             String key = ((ScalarNode) t.getKeyNode()).getValue();
+            if (out.containsKey(key)) {
+                throw new CaseNode(t.getKeyNode(), path, source).error("duplicate key '" + key + "'");
+            }
             out.put(key, new CaseNode(t.getValueNode(), path.isEmpty() ? key : path + "." + key, source));
         }
         return out;

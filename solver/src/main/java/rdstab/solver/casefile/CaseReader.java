@@ -96,12 +96,31 @@ public final class CaseReader {
             String at = e.getProblemMark().map(m -> (m.getLine() + 1) + ":" + (m.getColumn() + 1)).orElse(null);
             throw new InputException(source, at, "not valid YAML: " + oneLine(e.getProblem()));
         } catch (YamlEngineException e) {
-            throw new InputException(source, null, "not valid YAML: " + oneLine(e.getMessage()));
+            throw new InputException(source, firstSpecialCharacter(text), "not valid YAML: " + oneLine(e.getMessage()));
         }
         if (root.isEmpty()) {
-            throw new InputException(source, null, "the case file is empty; expected keys " + String.join(", ", TOP));
+            throw new InputException(source, "1:1", "the case file is empty; expected keys " + String.join(", ", TOP));
         }
         return new CaseReader.Reading(new CaseNode(root.get(), "", source)).build();
+    }
+
+    /** line:column of the first character YAML does not allow (control characters), or 1:1. */
+    static String firstSpecialCharacter(String text) {
+        int line = 1;
+        int col = 1;
+        for (int i = 0; i < text.length(); i++) {
+            char ch = text.charAt(i);
+            if (ch == '\n') {
+                line++;
+                col = 1;
+                continue;
+            }
+            if ((ch < 0x20 && ch != '\t' && ch != '\r') || ch == 0x7f || ch == 0xFFFE || ch == 0xFFFF) {
+                return line + ":" + col + " (character U+" + String.format("%04X", (int) ch) + ")";
+            }
+            col++;
+        }
+        return "1:1";
     }
 
     private static String oneLine(String s) {

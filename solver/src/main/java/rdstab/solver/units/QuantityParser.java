@@ -53,7 +53,14 @@ public final class QuantityParser {
             return new Parsed(v, AbstractUnit.ONE, v, "");
         }
         Unit<?> u = unit(ut);
-        return new Parsed(v, u, toSi(v, u), ut);
+        double si;
+        try {
+            si = toSi(v, u);
+        } catch (UnsupportedOperationException | ArithmeticException | MeasurementException e) {
+            throw new IllegalArgumentException("unit '" + ut + "' cannot be converted to SI (an offset unit such as degC "
+                    + "cannot be multiplied, divided or raised to a power)");
+        }
+        return new Parsed(v, u, si, ut);
     }
 
     /** Parses a unit text alone. */

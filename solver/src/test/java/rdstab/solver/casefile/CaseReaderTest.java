@@ -116,4 +116,21 @@ class CaseReaderTest {
         assertTrue(bad(GOOD.replace("shape: slab", "shape: cube")).problem().contains("unknown shape 'cube'"));
         assertTrue(bad(GOOD.replace("u: insulated", "u: {convection: 3}")).problem().contains("unknown condition 'convection'"));
     }
+
+    @Test
+    void duplicateKeysAreRefused() {
+        InputException e = bad(GOOD.replace("mesh: {cells: 50}", "mesh: {cells: 50}\nmesh: {cells: 60}"));
+        assertTrue(e.problem().contains("duplicate key 'mesh'"), e.getMessage());
+    }
+
+    @Test
+    void writtenBackAndReadAgainGivesTheSameCase() {
+        Case c = CaseReader.parse(GOOD, "good.yaml");
+        Case back = CaseReader.parse(CaseWriter.toYaml(c), "back.yaml");
+        assertEquals(c.parameters(), back.parameters());
+        assertEquals(c.fields().get(0).source().toString(), back.fields().get(0).source().toString());
+        assertEquals(c.boundaries().get("right").get("u").kind(), back.boundaries().get("right").get("u").kind());
+        assertEquals(c.mesh(), back.mesh());
+        assertEquals(c.toValue(), back.toValue());
+    }
 }
