@@ -43,7 +43,22 @@ final class ArclengthCorrector {
         for (int i = 0; i < n; i++) {
             u[i] = anchor.u()[i] + ds * anchor.tangentU()[i];
         }
-        double p = anchor.p() + ds * anchor.tangentP();
+        return newton(anchor, u, anchor.p() + ds * anchor.tangentP(), ds, Double.NaN);
+    }
+
+    /**
+     * The branch point at the parameter value p exactly (Newton on F(u; p) = 0 with the border row (0, 1)), from a
+     * nearby guess; its tangent is oriented by the anchor's. Used to land the last row on the end of the range.
+     */
+    BranchPoint atParameter(BranchPoint anchor, double[] guess, double p) {
+        return newton(anchor, guess.clone(), p, Double.NaN, p);
+    }
+
+    /** Newton on F = 0 plus the arclength equation (fixedP NaN) or p = fixedP. */
+    private BranchPoint newton(BranchPoint anchor, double[] u, double p0, double ds, double fixedP) {
+        int n = family.unknowns();
+        boolean arclength = Double.isNaN(fixedP);
+        double p = p0;
         double[] c = family.scaledWeights();
         for (int i = 0; i < n; i++) {
             c[i] *= anchor.tangentU()[i];
@@ -57,9 +72,9 @@ final class ArclengthCorrector {
             double rho = family.scaledResidual(f, p);
             double tol = Math.max(tolerance, roundOffFloor(j, u, p));
             double[] fp = family.parameterDerivative(u, p);
-            BorderedSystem a = BorderedSystem.factor(j, fp, c, anchor.tangentP());
+            BorderedSystem tangent = BorderedSystem.factor(j, fp, c, anchor.tangentP());
             if (rho <= tol) {
-                double[] t = a.solve(new double[n], 1.0);
+                double[] t = tangent.solve(new double[n], 1.0);
                 double norm = Math.sqrt(family.dot(t, t[n], t, t[n]));
                 double[] tu = new double[n];
                 for (int i = 0; i < n; i++) {
@@ -78,8 +93,13 @@ final class ArclengthCorrector {
             for (int i = 0; i < n; i++) {
                 g[i] = -f[i];
             }
-            double arc = -(family.dot(anchor.tangentU(), anchor.tangentP(), difference(u, anchor.u()), p - anchor.p()) - ds);
-            double[] d = a.solve(g, arc);
+            double[] d;
+            if (arclength) {
+                double arc = -(family.dot(anchor.tangentU(), anchor.tangentP(), difference(u, anchor.u()), p - anchor.p()) - ds);
+                d = tangent.solve(g, arc);
+            } else {
+                d = BorderedSystem.factor(j, fp, new double[n], 1.0).solve(g, 0.0);
+            }
             for (int i = 0; i < n; i++) {
                 u[i] += d[i];
             }

@@ -47,6 +47,7 @@ public final class BranchTracer {
     private final List<SpecialPoint> specials = new ArrayList<>();
     private final List<String> warnings = new ArrayList<>();
     private int nextRow;
+    private String skipOnce = "";
     private int rejected;
 
     private BranchTracer(Case c, TraceOptions o, double reference, TraceListener l) {
@@ -74,6 +75,7 @@ public final class BranchTracer {
             throw new IllegalArgumentException("the restart state has " + r.point().u().length + " unknowns, the case has "
                     + t.family.unknowns() + " (same case and --cells needed)");
         }
+        t.skipOnce = r.label() == null ? "" : r.label();
         return t.run(r.point(), r.row(), r.step(), r.arclength(), r.nextStep());
     }
 
@@ -107,7 +109,7 @@ public final class BranchTracer {
         BranchPoint x = first;
         PointAnalysis xInfo = PointAnalysis.of(family, x.u(), x.p());
         addRow(steps, s, x, xInfo, "", ds);
-        String stop = null;
+        String stop = atEnd(x) ? String.format(Locale.ROOT, "reached %s = %.10g", options.name(), x.p()) : null;
         String lastFailure = "";
         while (stop == null) {
             if (steps >= options.maxSteps()) {
@@ -139,12 +141,13 @@ public final class BranchTracer {
                 SpecialPointLocator.Location end = locator.locate(x, xInfo, ds, y, yInfo, SpecialPointLocator.Needs.POINT,
                         (pt, info) -> pt.p() - bound);
                 step = end.s();
-                y = end.point();
-                yInfo = end.analysis();
+                y = land(x, end.point(), bound);
+                yInfo = PointAnalysis.of(family, y.u(), y.p());
                 stop = String.format(Locale.ROOT, "reached %s = %.10g", options.name(), y.p());
             }
             steps++;
             locateSpecials(x, xInfo, step, y, yInfo, steps - 1, s);
+            skipOnce = "";
             ds = adapt(ds, x, y);
             s += step;
             addRow(steps, s, y, yInfo, "", ds);
@@ -153,6 +156,21 @@ public final class BranchTracer {
         }
         return new TraceResult(family.baseCase(), options, rows, specials, steps - step0, rejected, stop, warnings,
                 SafetyCautions.STANDARD);
+    }
+
+    /** True when x lies on an end of the range with the tangent pointing out of it (a restart from the last row). */
+    private boolean atEnd(BranchPoint x) {
+        return x.p() == options.high() && x.tangentP() > 0 || x.p() == options.low() && x.tangentP() < 0;
+    }
+
+    /** The branch point exactly at p = bound, from the located one (falls back to it when Newton fails). */
+    private BranchPoint land(BranchPoint anchor, BranchPoint located, double bound) {
+        try {
+            return corrector.atParameter(anchor, located.u(), bound);
+        } catch (ConvergenceException e) {
+            warnings.add("the last row could not be moved exactly onto " + options.name() + " = " + bound + ": " + e.getMessage());
+            return located;
+        }
     }
 
     /** Null when the step is acceptable, else why not. */
@@ -215,6 +233,9 @@ public final class BranchTracer {
         }
         order.sort((a, b) -> Double.compare(found.get(a).s(), found.get(b).s()));
         for (int i : order) {
+            if (kinds.get(i).word().equals(skipOnce)) {
+                continue;
+            }
             record(kinds.get(i), found.get(i), xi, yi, step, s, ds);
         }
     }
