@@ -28,12 +28,12 @@ public record TraceOptions(String name, double from, double to, int maxSteps, do
     public static final double DEFAULT_ANGLE = 0.3;
 
     /**
-     * Defaults for a range: initial step |to − from| / 20, steps between 10⁻⁶ and 10 times that, 0.3 rad, 10 corrector
+     * Defaults for a range: initial step |to − from| / 20, steps between 10⁻⁶ and 50 times that, 0.3 rad, 10 corrector
      * iterations.
      */
     public static TraceOptions of(String name, double from, double to, int maxSteps, double step) {
         double s = Double.isNaN(step) ? Math.abs(to - from) / 20 : step;
-        return new TraceOptions(name, from, to, maxSteps, s, 1e-6 * s, 10 * s, DEFAULT_ANGLE, 10);
+        return new TraceOptions(name, from, to, maxSteps, s, 1e-6 * s, 50 * s, DEFAULT_ANGLE, 10);
     }
 
     public TraceOptions {
