@@ -8,7 +8,8 @@ package rdstab.cli.plot;
  * <p>Triangles use barycentric coordinates. Quadrilaterals (nodes counter-clockwise, reference corners
  * (0,0), (1,0), (1,1), (0,1)) invert the bilinear map by Newton's method from the centre; it is exact after one
  * step for parallelograms and converges quadratically for convex quadrilaterals; a point counts as inside when its
- * reference coordinates lie in [−1e-9, 1 + 1e-9] (round-off on shared edges). Both interpolants reproduce linear
+ * reference coordinates lie in [−1e-9, 1 + 1e-9] (round-off on shared edges) and the mapped point matches the
+ * pixel centre to 1e-9 of the cell size (an unconverged Newton iteration never counts as inside). Both interpolants reproduce linear
  * functions exactly, which the tests use as the check.
  *
  * @param xmin  left edge of the pixel grid
@@ -149,6 +150,17 @@ public record Raster(double xmin, double xmax, double ymin, double ymax, double[
             return Double.NaN;
         }
         double[] n = shape(xi, eta);
+        double rx = -px;
+        double ry = -py;
+        double size = 0;
+        for (int k = 0; k < 4; k++) {
+            rx += n[k] * x[c[k]];
+            ry += n[k] * y[c[k]];
+            size = Math.max(size, Math.abs(x[c[k]] - x[c[0]]) + Math.abs(y[c[k]] - y[c[0]]));
+        }
+        if (Math.abs(rx) + Math.abs(ry) > 1e-9 * size) {
+            return Double.NaN; // Newton did not converge: far outside this cell
+        }
         return n[0] * f[c[0]] + n[1] * f[c[1]] + n[2] * f[c[2]] + n[3] * f[c[3]];
     }
 
