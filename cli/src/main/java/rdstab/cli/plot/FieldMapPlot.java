@@ -38,6 +38,17 @@ public final class FieldMapPlot {
      * @param diverging true for signed data (diverging palette, symmetric range), false for the sequential one
      */
     public static HeatMapChart chart(String title, String xTitle, String yTitle, Raster r, boolean diverging) {
+        int plotW = PlotStyle.WIDTH - 260;
+        double aspect = (r.ymax() - r.ymin()) / (r.xmax() - r.xmin());
+        int height = (int) Math.max(380, Math.min(900, plotW * aspect + 150));
+        return chart(title, xTitle, yTitle, r, diverging, height);
+    }
+
+    /**
+     * Builds the chart with a given picture height (for parameter maps, whose axes have unrelated units; the
+     * other form sizes the picture so the body keeps its proportions).
+     */
+    public static HeatMapChart chart(String title, String xTitle, String yTitle, Raster r, boolean diverging, int height) {
         double[] range = r.range();
         if (Double.isNaN(range[0])) {
             throw new IllegalArgumentException("the colour map of '" + title + "' has no pixel inside the body");
@@ -57,9 +68,6 @@ public final class FieldMapPlot {
                 hi += pad;
             }
         }
-        int plotW = PlotStyle.WIDTH - 260;
-        double aspect = (r.ymax() - r.ymin()) / (r.xmax() - r.xmin());
-        int height = (int) Math.max(380, Math.min(900, plotW * aspect + 150));
         HeatMapChart c = new HeatMapChartBuilder().width(PlotStyle.WIDTH).height(height).title(title)
                 .xAxisTitle(xTitle).yAxisTitle(yTitle).build();
         HeatMapStyler s = c.getStyler();
@@ -112,11 +120,11 @@ public final class FieldMapPlot {
         for (int i = 0; i < n; i++) {
             out.add(" ");
         }
-        double step = niceStep((hi - lo) / 5);
+        double step = niceStep((hi - lo) / 6);
         double d = (hi - lo) / n;
         for (double t = Math.ceil(lo / step - 1e-9) * step; t <= hi + 1e-9 * step; t += step) {
-            int i = (int) Math.round((t - lo) / d - 0.5);
-            if (i >= 0 && i < n && Math.abs(lo + (i + 0.5) * d - t) <= 0.5 * d + 1e-12) {
+            int i = Math.max(0, Math.min(n - 1, (int) Math.round((t - lo) / d - 0.5)));
+            if (Math.abs(lo + (i + 0.5) * d - t) <= 0.5 * d * (1 + 1e-9)) {
                 out.set(i, PlotStyle.tick(Math.abs(t) < 1e-9 * step ? 0 : t));
             }
         }

@@ -79,6 +79,7 @@ public final class GrowthCurvePlot {
         c.getStyler().setXAxisMax(p[n - 1]);
         c.getStyler().setYAxisMin(bottom);
         c.getStyler().setYAxisMax(top);
+        PlotStyle.thinX(c, p[0], p[n - 1]);
         return c;
     }
 

@@ -153,8 +153,8 @@ public final class GrowthMapPlot {
                 cells[k++] = new int[] {i * nb + j, (i + 1) * nb + j, (i + 1) * nb + j + 1, i * nb + j + 1};
             }
         }
-        return FieldMapPlot.chart("Growth rate max Re λ (blue stable, red unstable)", aName, bName,
-                Raster.sample(x, y, cells, v, pixels), true);
+        return FieldMapPlot.chart("Growth rate max Re λ (blue stable, white neutral, red unstable)", aName, bName,
+                Raster.sample(x, y, cells, v, pixels, pixels * 3 / 5), true, PlotStyle.HEIGHT);
     }
 
     /** Writes {@code growth-map} and {@code neutral-curve} (PNG and SVG) into {@code dir}; returns the paths. */

@@ -49,6 +49,25 @@ public final class PlotStyle {
         return c;
     }
 
+    /**
+     * Labels only the x ticks on a coarse 1-2-5 step (about six labels over [lo, hi]); the library places ticks
+     * about every 40 pixels whatever its spacing hint, which crowds the labels. Grid lines stay at every tick.
+     */
+    public static void thinX(XYChart c, double lo, double hi) {
+        if (!(hi > lo)) {
+            return;
+        }
+        double step = FieldMapPlot.niceStep((hi - lo) / 6);
+        double eps = 1e-9 * (hi - lo);
+        c.getStyler().setxAxisTickLabelsFormattingFunction(v -> {
+            if (Math.abs(v - lo) <= eps || Math.abs(v - hi) <= eps) {
+                return tick(v); // the library sizes its tick spacing from the labels of the axis ends
+            }
+            double k = v / step;
+            return Math.abs(k - Math.rint(k)) < 1e-6 ? tick(Math.abs(v) < 1e-9 * step ? 0 : v) : "";
+        });
+    }
+
     /** Applies fonts, colours and borders. */
     public static void apply(AxesChartStyler s) {
         s.setChartBackgroundColor(Color.WHITE);

@@ -53,6 +53,7 @@ public final class ProfilePlot {
         c.getStyler().setLegendVisible(curves.size() > 1);
         c.getStyler().setXAxisMin(x[0]);
         c.getStyler().setXAxisMax(x[x.length - 1]);
+        PlotStyle.thinX(c, x[0], x[x.length - 1]);
         return c;
     }
 

@@ -63,6 +63,23 @@ public record Raster(double xmin, double xmax, double ymin, double ymax, double[
         }
         int nx = w >= h ? longSide : Math.max(2, (int) Math.round(longSide * w / h));
         int ny = h >= w ? longSide : Math.max(2, (int) Math.round(longSide * h / w));
+        return sample(x, y, cells, values, nx, ny);
+    }
+
+    /**
+     * Samples a nodal field on nx × ny pixels over the bounding box of the nodes (for parameter maps, whose axes
+     * have unrelated units).
+     */
+    public static Raster sample(double[] x, double[] y, int[][] cells, double[] values, int nx, int ny) {
+        double x0 = min(x);
+        double x1 = max(x);
+        double y0 = min(y);
+        double y1 = max(y);
+        double w = x1 - x0;
+        double h = y1 - y0;
+        if (!(w > 0) || !(h > 0) || nx < 2 || ny < 2) {
+            throw new IllegalArgumentException("a colour map needs a 2D body and at least 2 × 2 pixels");
+        }
         double[][] v = new double[nx][ny];
         for (double[] col : v) {
             java.util.Arrays.fill(col, Double.NaN);

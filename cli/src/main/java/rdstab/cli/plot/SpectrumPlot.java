@@ -62,6 +62,7 @@ public final class SpectrumPlot {
         c.getStyler().setXAxisMax(x1 + padX);
         c.getStyler().setYAxisMin(-yTop);
         c.getStyler().setYAxisMax(yTop);
+        PlotStyle.thinX(c, x0 - padX, x1 + padX);
         return c;
     }
 

@@ -53,6 +53,7 @@ public final class TimeHistoryPlot {
         }
         c.getStyler().setXAxisMin(t[0]);
         c.getStyler().setXAxisMax(t[n - 1]);
+        PlotStyle.thinX(c, t[0], t[n - 1]);
         return c;
     }
 
