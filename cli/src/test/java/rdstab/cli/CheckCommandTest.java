@@ -112,6 +112,27 @@ class CheckCommandTest {
     }
 
     @Test
+    void plotsReportAndVtkAreWrittenAndNotOverwritten() throws IOException {
+        Path fk = write("fk.yaml", FK);
+        Path pics = tmp.resolve("pics");
+        Path html = tmp.resolve("r.html");
+        Path vtk = tmp.resolve("vtk");
+        CliRun r = CliRun.of("check", fk.toString(), "--plots", pics.toString(), "--report", html.toString(),
+                "--vtk", vtk.toString());
+        assertEquals(0, r.code(), r.err());
+        for (String f : new String[] {"base-u", "modes-u", "spectrum"}) {
+            assertTrue(Files.size(pics.resolve(f + ".png")) > 1000, f + ".png");
+            assertTrue(Files.size(pics.resolve(f + ".svg")) > 1000, f + ".svg");
+        }
+        assertTrue(Files.readString(html).contains("Verdict: STABLE"));
+        assertTrue(Files.readString(vtk.resolve("check.vtk")).startsWith("# vtk DataFile Version 3.0"));
+        assertTrue(r.out().contains("6 pictures written"), r.out());
+        CliRun again = CliRun.of("check", fk.toString(), "--plots", pics.toString());
+        assertEquals(4, again.code(), "existing pictures must not be overwritten without --force");
+        assertEquals(0, CliRun.of("check", fk.toString(), "--plots", pics.toString(), "--force").code());
+    }
+
+    @Test
     void helpTeaches() {
         CliRun r = CliRun.of("check", "--help");
         assertEquals(0, r.code());

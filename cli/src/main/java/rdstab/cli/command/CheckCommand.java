@@ -9,6 +9,9 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 import rdstab.cli.output.ResultFiles;
+import rdstab.cli.output.VtkWriter;
+import rdstab.cli.plot.CheckPlots;
+import rdstab.cli.report.HtmlReport;
 import rdstab.cli.report.ResultJson;
 import rdstab.cli.report.TextReport;
 import rdstab.solver.drive.CheckResult;
@@ -26,7 +29,8 @@ import rdstab.solver.model.Case;
             "Examples:",
             "  rdstab check cases/slab-self-heating.yaml",
             "  rdstab check cases/slab-self-heating.yaml --set delta=0.85 --cells 400 --json",
-            "  rdstab check cases/sphere-stored-powder.yaml --out results/"},
+            "  rdstab check cases/sphere-stored-powder.yaml --out results/",
+            "  rdstab check cases/rod-upper-branch.yaml --plots pictures/ --report rod.html --vtk results/"},
         footerHeading = "%nLimits:%n",
         footer = {"  case files up to 1 MiB; formulas up to 10000 characters and 200 levels of nesting;",
             "  up to 4,000,000 cells per direction; YAML aliases limited to 20.",
@@ -46,7 +50,21 @@ public final class CheckCommand implements Callable<Integer> {
             description = "Write base.csv, modes.csv, eigenvalues.csv and result.json into DIR (created if needed).")
     Path out;
 
-    @Option(names = "--force", description = "Overwrite existing result files in --out.")
+    @Option(names = "--plots", paramLabel = "DIR",
+            description = "Draw the base state, the leading modes and the spectrum as PNG and SVG pictures into DIR "
+                    + "(1D: profiles; 2D: colour maps).")
+    Path plots;
+
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Write one self-contained HTML report (verdict, pictures, tables, cautions; readable offline).")
+    Path report;
+
+    @Option(names = "--vtk", paramLabel = "DIR",
+            description = "Write DIR/check.vtk (legacy VTK, ASCII): the mesh with the base state and every mode "
+                    + "(modeK_FIELD_re / _im) as point data, for open-source visualisation tools.")
+    Path vtk;
+
+    @Option(names = "--force", description = "Overwrite existing result files (--out, --plots, --vtk, --report).")
     boolean force;
 
     @Option(names = "--debug", description = "Show stack traces on errors.")
@@ -74,6 +92,24 @@ public final class CheckCommand implements Callable<Integer> {
             ResultFiles.write(r, out, force);
             if (!json) {
                 w.println("Files written to " + out + ": base.csv, modes.csv, eigenvalues.csv, result.json");
+            }
+        }
+        if (plots != null) {
+            int n = CheckPlots.write(r, plots, force).size();
+            if (!json) {
+                w.println(n + " pictures written to " + plots + " (PNG and SVG)");
+            }
+        }
+        if (vtk != null) {
+            Path p = VtkWriter.write(r, vtk, force);
+            if (!json) {
+                w.println("VTK file written: " + p);
+            }
+        }
+        if (report != null) {
+            HtmlReport.write(r, report, force);
+            if (!json) {
+                w.println("HTML report written: " + report);
             }
         }
         w.flush();

@@ -24,6 +24,17 @@ public final class AtomicFiles {
      * @param overwrite replace an existing file
      */
     public static void write(Path target, String text, boolean overwrite) {
+        write(target, text.getBytes(StandardCharsets.UTF_8), overwrite);
+    }
+
+    /**
+     * Writes bytes (images) the same way.
+     *
+     * @param target    the file to write
+     * @param bytes     its whole content
+     * @param overwrite replace an existing file
+     */
+    public static void write(Path target, byte[] bytes, boolean overwrite) {
         try {
             Path dir = target.toAbsolutePath().getParent();
             Files.createDirectories(dir);
@@ -32,7 +43,7 @@ public final class AtomicFiles {
             }
             Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
             try {
-                Files.writeString(tmp, text, StandardCharsets.UTF_8);
+                Files.write(tmp, bytes);
                 Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } finally {
                 Files.deleteIfExists(tmp);
