@@ -44,6 +44,15 @@ public final class AtomicFiles {
             Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
             try {
                 Files.write(tmp, bytes);
+                try (java.nio.channels.FileChannel ch = java.nio.channels.FileChannel.open(tmp, java.nio.file.StandardOpenOption.WRITE)) {
+                    ch.force(true);
+                }
+                try {
+                    // temporary files are created private (0600); results are ordinary files (0644)
+                    Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+                } catch (UnsupportedOperationException e) {
+                    // not a POSIX file system: keep the default permissions
+                }
                 Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } finally {
                 Files.deleteIfExists(tmp);
