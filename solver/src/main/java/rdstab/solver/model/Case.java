@@ -25,11 +25,19 @@ import rdstab.solver.error.InputException;
  * @param fields      the fields, in file order (unknown numbering follows it)
  * @param boundaries  boundary part name → field name → condition
  * @param analysis    analysis options
+ * @param plane       the outline of a polygon or the mesh file of a mesh-file shape (null otherwise)
  */
 public record Case(String source, String title, String about, Shape shape, Quantity from, Quantity to,
                    Quantity fromY, Quantity toY, MeshSpec mesh,
                    Map<String, Double> parameters, List<FieldSpec> fields,
-                   Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis) {
+                   Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis, PlaneSpec plane) {
+
+    /** A case without a polygon outline or mesh file. */
+    public Case(String source, String title, String about, Shape shape, Quantity from, Quantity to,
+                Quantity fromY, Quantity toY, MeshSpec mesh, Map<String, Double> parameters, List<FieldSpec> fields,
+                Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis) {
+        this(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, analysis, null);
+    }
 
     /** Coordinate names usable in formulas. */
     public static final List<String> COORDINATES_1D = List.of("x");
@@ -82,17 +90,17 @@ public record Case(String source, String title, String about, Shape shape, Quant
         }
         Map<String, Double> p = new LinkedHashMap<>(parameters);
         p.put(name, value);
-        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, p, fields, boundaries, analysis);
+        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, p, fields, boundaries, analysis, plane);
     }
 
     /** A copy with other mesh settings. */
     public Case withMesh(MeshSpec m) {
-        return new Case(source, title, about, shape, from, to, fromY, toY, m, parameters, fields, boundaries, analysis);
+        return new Case(source, title, about, shape, from, to, fromY, toY, m, parameters, fields, boundaries, analysis, plane);
     }
 
     /** A copy with other analysis options. */
     public Case withAnalysis(AnalysisSpec a) {
-        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, a);
+        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, a, plane);
     }
 
     private InputException unknownParameter(String name, String where) {
