@@ -23,7 +23,9 @@ public final class TextReport {
         Case c = r.problem().theCase();
         Assessment a = r.assessment();
         w.println(c.title());
-        w.println("case " + c.source() + " | " + c.shape().word() + ", " + c.mesh().cells() + " cells, "
+        String cells = c.shape().dimension() == 2 ? r.problem().full().cells().length + (c.shape().triangles() ? " triangles, " : " cells, ")
+                : c.mesh().cells() + " cells, ";
+        w.println("case " + c.source() + " | " + c.shape().word() + ", " + cells
                 + r.problem().full().unknowns() + " unknowns | " + parameters(c));
         w.println();
         w.println("VERDICT: " + a.verdict().word().toUpperCase(Locale.ROOT) + " — " + meaning(a.verdict()));

@@ -26,6 +26,7 @@ import rdstab.solver.model.Case;
 import rdstab.solver.model.FieldSpec;
 import rdstab.solver.model.MeshSpec;
 import rdstab.solver.model.PhysicalInputs;
+import rdstab.solver.model.PlaneSpec;
 import rdstab.solver.model.Quantity;
 import rdstab.solver.model.Shape;
 import rdstab.solver.units.QuantityParser;
@@ -51,8 +52,9 @@ public final class CaseReader {
 
     private static final Set<String> TOP = new java.util.LinkedHashSet<>(List.of("title", "about", "geometry", "mesh",
             "parameters", "derived", "self-heating", "fields", "boundaries", "analysis"));
-    private static final Set<String> GEOMETRY = Set.of("shape", "from", "to", "y-from", "y-to");
-    private static final Set<String> MESH = Set.of("cells", "cells-y", "stretch");
+    private static final Set<String> GEOMETRY = Set.of("shape", "from", "to", "y-from", "y-to", "radius", "inner-radius",
+            "outer-radius", "outer", "holes", "file");
+    private static final Set<String> MESH = Set.of("cells", "cells-y", "stretch", "size");
     private static final Set<String> STRETCH = Set.of("toward", "strength");
     private static final Set<String> FIELD = Set.of("name", "unit", "diffusivity", "source", "initial", "drift");
     private static final Set<String> ANALYSIS = Set.of("modes", "shift", "newton-tolerance", "newton-max-steps",
@@ -152,8 +154,10 @@ public final class CaseReader {
             CaseNode shapeNode = require(geo, g, "shape");
             Shape shape = Shape.byWord(shapeNode.text().trim());
             if (shape == null) {
-                throw shapeNode.error("unknown shape '" + shapeNode.text() + "'; expected slab, cylinder, sphere or rectangle");
+                throw shapeNode.error("unknown shape '" + shapeNode.text() + "'; expected slab, cylinder, sphere, rectangle, "
+                        + "disk, annulus, l-shape, polygon or mesh-file");
             }
+            checkGeometryKeys(shape, g);
             SelfHeatingSection.Generated model = null;
             if (top.containsKey("self-heating")) {
                 model = selfHeating(top, shape, g);
@@ -161,25 +165,71 @@ public final class CaseReader {
             if (top.containsKey("derived")) {
                 readDerived(top.get("derived"));
             }
-            Quantity from = g.containsKey("from") ? quantity(g.get("from")) : Quantity.of(0, geo.place());
-            Quantity to = model != null ? Quantity.of(1, geo.place()) : quantity(require(geo, g, "to"));
+            Quantity from;
+            Quantity to;
             Quantity fromY = null;
             Quantity toY = null;
-            if (shape.dimension() == 2) {
-                fromY = g.containsKey("y-from") ? quantity(g.get("y-from")) : Quantity.of(0, geo.place());
-                toY = quantity(require(geo, g, "y-to"));
-            } else if (g.containsKey("y-from") || g.containsKey("y-to")) {
-                throw (g.containsKey("y-to") ? g.get("y-to") : g.get("y-from")).error("y-from / y-to apply to 2D shapes only");
+            PlaneSpec plane = null;
+            List<String> parts;
+            switch (shape) {
+                case DISK -> {
+                    from = Quantity.of(0, geo.place());
+                    to = quantity(require(geo, g, "radius"));
+                    parts = List.of("edge");
+                }
+                case ANNULUS -> {
+                    from = quantity(require(geo, g, "inner-radius"));
+                    to = quantity(require(geo, g, "outer-radius"));
+                    if (!(from.value(parameters) > 0)) {
+                        throw g.get("inner-radius").error("the inner radius must be > 0, found " + from.value(parameters));
+                    }
+                    parts = List.of("inner", "outer");
+                }
+                case POLYGON -> {
+                    plane = PlaneReader.polygon(geo, g);
+                    from = Quantity.of(0, geo.place());
+                    to = Quantity.of(1, geo.place());
+                    parts = PlaneReader.parts(plane);
+                }
+                case MESH_FILE -> {
+                    plane = PlaneReader.meshFile(geo, g, source);
+                    from = Quantity.of(0, geo.place());
+                    to = Quantity.of(1, geo.place());
+                    parts = PlaneReader.readMesh(plane.meshFile()).partNames();
+                }
+                default -> {
+                    from = g.containsKey("from") ? quantity(g.get("from")) : Quantity.of(0, geo.place());
+                    to = model != null ? Quantity.of(1, geo.place()) : quantity(require(geo, g, "to"));
+                    if (shape.dimension() == 2) {
+                        fromY = g.containsKey("y-from") ? quantity(g.get("y-from")) : Quantity.of(0, geo.place());
+                        toY = quantity(require(geo, g, "y-to"));
+                        if (!(toY.value(parameters) > fromY.value(parameters))) {
+                            throw geo.error("'y-to' (" + toY.value(parameters) + ") must be greater than 'y-from' ("
+                                    + fromY.value(parameters) + ")");
+                        }
+                    }
+                    parts = shape == Shape.L_SHAPE ? List.of("edge") : boundaryParts(shape, from.value(parameters) == 0.0);
+                }
             }
             checkExtent(shape, from, to, geo);
-            MeshSpec mesh = model != null && !top.containsKey("mesh") ? new MeshSpec(200, 0, "none", 0)
-                    : readMesh(require(root, top, "mesh"), shape);
+            MeshSpec mesh;
+            if (shape == Shape.MESH_FILE) {
+                if (top.containsKey("mesh")) {
+                    throw top.get("mesh").error("a mesh-file shape brings its own mesh; remove the 'mesh' section");
+                }
+                mesh = new MeshSpec(0, 0, "none", 0, 0);
+            } else if (model != null && !top.containsKey("mesh")) {
+                mesh = new MeshSpec(200, 0, "none", 0, 0);
+            } else {
+                mesh = readMesh(require(root, top, "mesh"), shape);
+            }
             List<FieldSpec> fields = model != null ? model.fields() : readFields(require(root, top, "fields"), shape);
             Map<String, Map<String, BoundarySpec>> bcs = model != null ? model.boundaries()
-                    : readBoundaries(require(root, top, "boundaries"), shape, from.value(parameters) == 0.0, fields);
+                    : readBoundaries(require(root, top, "boundaries"), shape, from.value(parameters) == 0.0, fields, parts);
             AnalysisSpec analysis = top.containsKey("analysis") ? readAnalysis(top.get("analysis")) : AnalysisSpec.defaults();
             PhysicalInputs physical = new PhysicalInputs(units, derived, model == null ? null : model.model());
-            return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, bcs, analysis, physical);
+            return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, bcs, analysis,
+                    physical, plane);
         }
 
         private SelfHeatingSection.Generated selfHeating(Map<String, CaseNode> top, Shape shape, Map<String, CaseNode> g) {
@@ -223,6 +273,23 @@ public final class CaseReader {
                 }
                 derived.put(e.getKey(), f);
                 parameters.put(e.getKey(), v);
+            }
+        }
+
+        private void checkGeometryKeys(Shape shape, Map<String, CaseNode> g) {
+            Set<String> allowed = switch (shape) {
+                case SLAB, CYLINDER, SPHERE -> Set.of("shape", "from", "to");
+                case RECTANGLE, L_SHAPE -> Set.of("shape", "from", "to", "y-from", "y-to");
+                case DISK -> Set.of("shape", "radius");
+                case ANNULUS -> Set.of("shape", "inner-radius", "outer-radius");
+                case POLYGON -> Set.of("shape", "outer", "holes");
+                case MESH_FILE -> Set.of("shape", "file");
+            };
+            for (Map.Entry<String, CaseNode> e : g.entrySet()) {
+                if (!allowed.contains(e.getKey())) {
+                    throw e.getValue().error("'" + e.getKey() + "' does not apply to the shape " + shape.word()
+                            + "; its geometry keys are " + String.join(", ", new java.util.TreeSet<>(allowed)));
+                }
             }
         }
 
@@ -271,7 +338,11 @@ public final class CaseReader {
             double a = from.value(parameters);
             double b = to.value(parameters);
             if (!(b > a)) {
-                throw geo.error("'to' (" + b + ") must be greater than 'from' (" + a + ")");
+                throw geo.error(switch (shape) {
+                    case DISK -> "the radius must be > 0, found " + b;
+                    case ANNULUS -> "'outer-radius' (" + b + ") must be greater than 'inner-radius' (" + a + ")";
+                    default -> "'to' (" + b + ") must be greater than 'from' (" + a + ")";
+                });
             }
             if (shape.radial() && a < 0) {
                 throw geo.error("a " + shape.word() + " needs from >= 0 (0 = the centre), found " + a);
@@ -280,6 +351,13 @@ public final class CaseReader {
 
         private MeshSpec readMesh(CaseNode node, Shape shape) {
             Map<String, CaseNode> m = node.entries(MESH);
+            if (shape.triangles()) {
+                return readTriangleMesh(node, m, shape);
+            }
+            if (m.containsKey("size")) {
+                throw m.get("size").error("'size' applies to triangle shapes (disk, annulus, l-shape, polygon); "
+                        + "use 'cells' here");
+            }
             int cells = require(node, m, "cells").integer(2, MAX_CELLS);
             int cellsY = 0;
             if (shape.dimension() == 2) {
@@ -302,6 +380,24 @@ public final class CaseReader {
                 }
             }
             return new MeshSpec(cells, cellsY, toward, strength);
+        }
+
+        /** Triangle shapes: 'size' (target edge length) or 'cells' (elements across the larger extent), not both. */
+        private MeshSpec readTriangleMesh(CaseNode node, Map<String, CaseNode> m, Shape shape) {
+            for (String k : List.of("cells-y", "stretch")) {
+                if (m.containsKey(k)) {
+                    throw m.get(k).error("'" + k + "' does not apply to the triangle shape " + shape.word() + "; use 'size'");
+                }
+            }
+            if (m.containsKey("size") == m.containsKey("cells")) {
+                throw node.error("a " + shape.word() + " mesh needs either 'size' (target element edge length) or 'cells' "
+                        + "(elements across the shape), not both");
+            }
+            if (m.containsKey("cells")) {
+                return new MeshSpec(m.get("cells").integer(2, 4000), 0, "none", 0, 0);
+            }
+            double size = positive(m.get("size"));
+            return new MeshSpec(0, 0, "none", 0, size);
         }
 
         private List<FieldSpec> readFields(CaseNode node, Shape shape) {
@@ -385,9 +481,8 @@ public final class CaseReader {
         }
 
         private Map<String, Map<String, BoundarySpec>> readBoundaries(CaseNode node, Shape shape, boolean centre,
-                                                                     List<FieldSpec> fields) {
-            List<String> parts = boundaryParts(shape, centre);
-            Map<String, CaseNode> b = node.entries(new LinkedHashSet<>(allParts(shape)));
+                                                                     List<FieldSpec> fields, List<String> parts) {
+            Map<String, CaseNode> b = node.entries(new LinkedHashSet<>(shape.radial() ? allParts(shape) : parts));
             Map<String, Map<String, BoundarySpec>> out = new LinkedHashMap<>();
             Set<String> fieldNames = new LinkedHashSet<>();
             fields.forEach(f -> fieldNames.add(f.name()));
@@ -490,6 +585,11 @@ public final class CaseReader {
             }
             return v;
         }
+    }
+
+    /** Reads and validates a triangle-mesh file; errors name that file and its line (exit 2). */
+    public static rdstab.mesh.fem.TriangleMesh readMeshFile(Path file) {
+        return PlaneReader.readMesh(file);
     }
 
     /** Boundary parts that need a condition for a shape. */

@@ -31,24 +31,10 @@ public final class CaseWriter {
         if (!c.about().isEmpty()) {
             top.put("about", c.about());
         }
-        Map<String, Object> geo = new LinkedHashMap<>();
-        geo.put("shape", c.shape().word());
-        geo.put("from", text(c.from()));
-        geo.put("to", text(c.to()));
-        if (c.fromY() != null) {
-            geo.put("y-from", text(c.fromY()));
-            geo.put("y-to", text(c.toY()));
+        top.put("geometry", geometry(c));
+        if (c.shape() != rdstab.solver.model.Shape.MESH_FILE) {
+            top.put("mesh", mesh(c));
         }
-        top.put("geometry", geo);
-        Map<String, Object> mesh = new LinkedHashMap<>();
-        mesh.put("cells", c.mesh().cells());
-        if (c.mesh().cellsY() > 0) {
-            mesh.put("cells-y", c.mesh().cellsY());
-        }
-        if (c.mesh().stretch() > 0 && !"none".equals(c.mesh().stretchTo())) {
-            mesh.put("stretch", Map.of("toward", c.mesh().stretchTo(), "strength", c.mesh().stretch()));
-        }
-        top.put("mesh", mesh);
         Map<String, Object> params = new LinkedHashMap<>();
         for (String name : c.parameters().keySet()) {
             if (c.physical().derived().containsKey(name)) {
@@ -92,6 +78,67 @@ public final class CaseWriter {
         top.put("analysis", analysis(c));
         DumpSettings settings = DumpSettings.builder().setDefaultFlowStyle(FlowStyle.BLOCK).setWidth(4096).build();
         return new Dump(settings).dumpToString(top);
+    }
+
+    private static Map<String, Object> geometry(Case c) {
+        Map<String, Object> geo = new LinkedHashMap<>();
+        geo.put("shape", c.shape().word());
+        switch (c.shape()) {
+            case DISK -> geo.put("radius", text(c.to()));
+            case ANNULUS -> {
+                geo.put("inner-radius", text(c.from()));
+                geo.put("outer-radius", text(c.to()));
+            }
+            case POLYGON -> {
+                List<rdstab.solver.model.PlaneSpec.Ring> rings = c.plane().rings();
+                geo.put("outer", ring(rings.get(0)));
+                if (rings.size() > 1) {
+                    List<Object> holes = new ArrayList<>();
+                    for (int i = 1; i < rings.size(); i++) {
+                        holes.add(ring(rings.get(i)));
+                    }
+                    geo.put("holes", holes);
+                }
+            }
+            case MESH_FILE -> geo.put("file", java.nio.file.Path.of(c.source()).toAbsolutePath().getParent()
+                    .relativize(c.plane().meshFile().toAbsolutePath()).toString());
+            default -> {
+                geo.put("from", text(c.from()));
+                geo.put("to", text(c.to()));
+                if (c.fromY() != null) {
+                    geo.put("y-from", text(c.fromY()));
+                    geo.put("y-to", text(c.toY()));
+                }
+            }
+        }
+        return geo;
+    }
+
+    private static Map<String, Object> ring(rdstab.solver.model.PlaneSpec.Ring r) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        List<Object> pts = new ArrayList<>();
+        for (double[] p : r.points()) {
+            pts.add(List.of(p[0], p[1]));
+        }
+        m.put("points", pts);
+        m.put("parts", List.of(r.parts()));
+        return m;
+    }
+
+    private static Map<String, Object> mesh(Case c) {
+        Map<String, Object> mesh = new LinkedHashMap<>();
+        if (c.shape().triangles() && c.mesh().size() > 0) {
+            mesh.put("size", c.mesh().size());
+        } else {
+            mesh.put("cells", c.mesh().cells());
+        }
+        if (c.mesh().cellsY() > 0) {
+            mesh.put("cells-y", c.mesh().cellsY());
+        }
+        if (c.mesh().stretch() > 0 && !"none".equals(c.mesh().stretchTo())) {
+            mesh.put("stretch", Map.of("toward", c.mesh().stretchTo(), "strength", c.mesh().stretch()));
+        }
+        return mesh;
     }
 
     private static String unitForReading(String name, Case c) {

@@ -28,18 +28,36 @@ import rdstab.solver.units.QuantityParser;
  * @param boundaries  boundary part name → field name → condition
  * @param analysis    analysis options
  * @param physical    parameter units, derived parameters and the physical self-heating model (if any)
+ * @param plane       the outline of a polygon or the mesh file of a mesh-file shape (null otherwise)
  */
 public record Case(String source, String title, String about, Shape shape, Quantity from, Quantity to,
                    Quantity fromY, Quantity toY, MeshSpec mesh,
                    Map<String, Double> parameters, List<FieldSpec> fields,
-                   Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis, PhysicalInputs physical) {
+                   Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis, PhysicalInputs physical,
+                   PlaneSpec plane) {
 
-    /** A case without units or derived parameters. */
+    /** A case without units, derived parameters, polygon outline or mesh file. */
     public Case(String source, String title, String about, Shape shape, Quantity from, Quantity to,
                 Quantity fromY, Quantity toY, MeshSpec mesh, Map<String, Double> parameters, List<FieldSpec> fields,
                 Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis) {
         this(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, analysis,
-                PhysicalInputs.none());
+                PhysicalInputs.none(), (PlaneSpec) null);
+    }
+
+    /** A case without a polygon outline or mesh file. */
+    public Case(String source, String title, String about, Shape shape, Quantity from, Quantity to,
+                Quantity fromY, Quantity toY, MeshSpec mesh, Map<String, Double> parameters, List<FieldSpec> fields,
+                Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis, PhysicalInputs physical) {
+        this(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, analysis, physical,
+                (PlaneSpec) null);
+    }
+
+    /** A case without units or derived parameters. */
+    public Case(String source, String title, String about, Shape shape, Quantity from, Quantity to,
+                Quantity fromY, Quantity toY, MeshSpec mesh, Map<String, Double> parameters, List<FieldSpec> fields,
+                Map<String, Map<String, BoundarySpec>> boundaries, AnalysisSpec analysis, PlaneSpec plane) {
+        this(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, analysis,
+                PhysicalInputs.none(), plane);
     }
 
     /** Coordinate names usable in formulas. */
@@ -109,7 +127,7 @@ public record Case(String source, String title, String about, Shape shape, Quant
         });
         p.put(name, value);
         return new Case(source, title, about, shape, from, to, fromY, toY, mesh, physical.withDerived(p), fields, boundaries,
-                analysis, physical);
+                analysis, physical, plane);
     }
 
     /**
@@ -156,12 +174,12 @@ public record Case(String source, String title, String about, Shape shape, Quant
 
     /** A copy with other mesh settings. */
     public Case withMesh(MeshSpec m) {
-        return new Case(source, title, about, shape, from, to, fromY, toY, m, parameters, fields, boundaries, analysis, physical);
+        return new Case(source, title, about, shape, from, to, fromY, toY, m, parameters, fields, boundaries, analysis, physical, plane);
     }
 
     /** A copy with other analysis options. */
     public Case withAnalysis(AnalysisSpec a) {
-        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, a, physical);
+        return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, boundaries, a, physical, plane);
     }
 
     private InputException unknownParameter(String name, String where) {

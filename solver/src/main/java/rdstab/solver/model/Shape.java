@@ -9,7 +9,17 @@ public enum Shape {
     /** Sphere, radial coordinate r. */
     SPHERE("sphere", 1),
     /** Rectangle (x, y), finite differences. */
-    RECTANGLE("rectangle", 2);
+    RECTANGLE("rectangle", 2),
+    /** Disk of a given radius centred at the origin, P1 triangles; boundary part "edge". */
+    DISK("disk", 2),
+    /** Annulus (ring) centred at the origin, P1 triangles; parts "inner" and "outer". */
+    ANNULUS("annulus", 2),
+    /** The rectangle from/to × y-from/y-to without its upper-right quarter, P1 triangles; part "edge". */
+    L_SHAPE("l-shape", 2),
+    /** A polygon with holes given by corner points, P1 triangles; parts named in the case file. */
+    POLYGON("polygon", 2),
+    /** A triangle mesh read from a file beside the case file, P1 triangles; parts from the file. */
+    MESH_FILE("mesh-file", 2);
 
     private final String word;
     private final int dimension;
@@ -37,6 +47,11 @@ public enum Shape {
             }
         }
         return null;
+    }
+
+    /** True for the 2D shapes meshed with triangles (finite elements). */
+    public boolean triangles() {
+        return dimension == 2 && this != RECTANGLE;
     }
 
     /** True for curved 1D bodies with a radial coordinate. */

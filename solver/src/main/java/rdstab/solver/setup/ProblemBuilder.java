@@ -28,8 +28,8 @@ public final class ProblemBuilder {
 
     /** Builds the problem of a case at its current parameters. */
     public static Problem build(Case c) {
-        if (c.shape().dimension() != 1) {
-            throw new InputException(c.source(), null, "shape '" + c.shape().word() + "' is not supported yet; use slab, cylinder or sphere");
+        if (c.shape().dimension() == 2) {
+            return PlaneProblems.build(c);
         }
         Grid1D grid = grid(c);
         FormulaKernel kernel = new FormulaKernel(c);
@@ -88,7 +88,7 @@ public final class ProblemBuilder {
         }
     }
 
-    private static BoundaryCondition condition(Case c, String part, FieldSpec field) {
+    static BoundaryCondition condition(Case c, String part, FieldSpec field) {
         BoundarySpec s = c.boundaries().get(part).get(field.name());
         Map<String, Double> p = c.parameters();
         try {
