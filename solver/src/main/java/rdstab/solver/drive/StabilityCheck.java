@@ -16,6 +16,8 @@ import rdstab.solver.eigen.EigenSolvers;
 import rdstab.solver.eigen.Spectrum;
 import rdstab.solver.energy.EnergyAnalysis;
 import rdstab.solver.energy.EnergyRates;
+import rdstab.solver.energy.PoincareConstant;
+import rdstab.solver.energy.TransientGrowth;
 import rdstab.solver.error.ConvergenceException;
 import rdstab.solver.error.ConvergenceException.Reason;
 import rdstab.solver.model.AnalysisSpec;
@@ -66,7 +68,7 @@ public final class StabilityCheck {
         List<String> warnings = new ArrayList<>();
         List<EigenPair> modes = trusted(spectrum.pairs(), a.residualLimit(), warnings);
         DMatrixSparseCSC t = p.transport().jacobian(base.u());
-        EnergyRates energy = EnergyAnalysis.compute(d, j, t, m);
+        EnergyRates energy = energy(c, d, j, t, m, modes.get(0).re(), a);
         seconds.put("energy", (System.nanoTime() - t2) * 1e-9);
         if (!spectrum.rightmostCertified()) {
             warnings.add("the returned eigenvalues are the ones nearest the shift; an eigenvalue with a large imaginary "
@@ -83,6 +85,36 @@ public final class StabilityCheck {
         }
         Assessment as = assess(c, d, modes, energy, j, m, warnings);
         return new CheckResult(p, base, nodal, max, modes, spectrum.shift(), spectrum.rightmostCertified(), energy, as, seconds);
+    }
+
+    /**
+     * The energy rates in the case's weights (or chosen ones), the analytic Poincaré constant where the shape
+     * allows, and — when the spectrum decays but the energy rate is positive — the peak amplification.
+     */
+    static EnergyRates energy(Case c, Discretization d, DMatrixSparseCSC j, DMatrixSparseCSC t, DMatrixSparseCSC m,
+                              double spectralAbscissa, AnalysisSpec a) {
+        EnergyRates e = EnergyAnalysis.compute(d, j, t, m, a.energyWeights());
+        PoincareConstant.Value pc = PoincareConstant.of(c);
+        e = e.withPoincare(pc.mu(), pc.source());
+        double band = a.marginalBand();
+        if (e.selfAdjoint() || e.numericalAbscissa() <= 0) {
+            return e.withAmplification(1.0, 0.0, "1 at t = 0: the energy never grows (numerical abscissa ≤ 0"
+                    + (e.selfAdjoint() ? ", self-adjoint operator)" : ")"));
+        }
+        if (!(spectralAbscissa < -band)) {
+            return e.withAmplification(Double.NaN, Double.NaN, "not computed: the spectrum is not stable, growth is unbounded");
+        }
+        if (a.amplificationBudget() <= 0 || !d.massIsDiagonal()) {
+            return e.withAmplification(Double.NaN, Double.NaN, a.amplificationBudget() <= 0
+                    ? "not computed (amplification budget 0)" : "not computed (needs a lumped weight matrix)");
+        }
+        double[] wu = EnergyAnalysis.perUnknown(e.weights(), EnergyAnalysis.fieldOfUnknown(d));
+        TransientGrowth.Result r = TransientGrowth.search(j, m, wu, spectralAbscissa, e.numericalAbscissa(),
+                a.amplificationBudget());
+        String note = String.format(java.util.Locale.ROOT, "power iteration on Crank–Nicolson propagators, %d linear solves%s%s",
+                r.solves(), r.budgetSpent() ? "; budget spent, the peak may be higher (raise --amplification-budget)" : "",
+                r.atWindowEnd() ? "; peak at the end of the searched window, it may come later" : "");
+        return e.withAmplification(r.peak(), r.time(), note);
     }
 
     /** Newton from the guess; failure becomes NO_STEADY_STATE with the reason kept in the message. */
@@ -146,8 +178,10 @@ public final class StabilityCheck {
             energyVerdict = "energy-stable: every disturbance decays from the start";
         } else if (v == Verdict.STABLE) {
             energyVerdict = "modally stable, transient growth possible";
+            String by = Double.isFinite(energy.peakAmplification()) ? String.format(java.util.Locale.ROOT,
+                    " (energy-norm amplification up to %.4g at t ≈ %.3g)", energy.peakAmplification(), energy.peakTime()) : "";
             warnings.add("the energy rate is positive while every mode decays: some disturbances grow for a while "
-                    + "before they decay (transient growth)");
+                    + "before they decay (transient growth)" + by);
         } else {
             energyVerdict = v == Verdict.UNSTABLE ? "unstable" : "marginal: the energy rate is not negative";
         }
