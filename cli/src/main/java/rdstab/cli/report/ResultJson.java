@@ -92,6 +92,7 @@ public final class ResultJson {
         m.put("rightmost_certified", r.rightmostCertified());
         m.put("cells", r.problem().theCase().mesh().cells());
         m.put("warnings", a.warnings());
+        PatternReport.put(r, m);
         return m;
     }
 

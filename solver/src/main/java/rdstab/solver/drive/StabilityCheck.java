@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import org.ejml.data.DMatrixSparseCSC;
 import rdstab.mesh.assembly.Discretization;
+import rdstab.mesh.assembly.FiniteVolume1D;
 import rdstab.solver.assess.Assessment;
 import rdstab.solver.assess.SafetyCautions;
 import rdstab.solver.assess.Verdict;
@@ -24,6 +25,8 @@ import rdstab.solver.model.AnalysisSpec;
 import rdstab.solver.model.Case;
 import rdstab.solver.newton.BaseState;
 import rdstab.solver.newton.DampedNewton;
+import rdstab.solver.pattern.DispersionRelation;
+import rdstab.solver.pattern.PecletNumbers;
 import rdstab.solver.setup.Problem;
 import rdstab.solver.setup.ProblemBuilder;
 
@@ -83,8 +86,18 @@ public final class StabilityCheck {
             }
             max.put(c.fields().get(f).name(), mx);
         }
+        PecletNumbers.Result flow = null;
+        DispersionRelation.Result dispersion = null;
+        if (d instanceof FiniteVolume1D fv) {
+            flow = PecletNumbers.of(fv, c.fieldNames(), base.u());
+            if (flow.warning() != null) {
+                warnings.add(flow.warning());
+            }
+            dispersion = DispersionRelation.of(fv, base.u());
+        }
         Assessment as = assess(c, d, modes, energy, j, m, warnings);
-        return new CheckResult(p, base, nodal, max, modes, spectrum.shift(), spectrum.rightmostCertified(), energy, as, seconds);
+        return new CheckResult(p, base, nodal, max, modes, spectrum.shift(), spectrum.rightmostCertified(), energy, as, seconds,
+                flow, dispersion);
     }
 
     /**
