@@ -130,9 +130,9 @@ public final class ProblemBuilder {
     private static void checkDiffusivities(Case c) {
         for (FieldSpec f : c.fields()) {
             rdstab.solver.formula.Formula k = f.diffusivity().substitute(c.parameters());
-            if (k.isConstant() && !(k.constantValue() > 0)) {
+            if (k.isConstant() && !(k.constantValue() > 0 && Double.isFinite(k.constantValue()))) {
                 throw new InputException(c.source(), f.placeOf("diffusivity"), "the diffusivity of field '" + f.name()
-                        + "' (" + f.diffusivity() + ") is " + k.constantValue() + " at the current parameters; it must be > 0");
+                        + "' (" + f.diffusivity() + ") is " + k.constantValue() + " at the current parameters; it must be a finite number > 0");
             }
         }
     }
