@@ -50,9 +50,11 @@ class TransientGrowthTest {
                 bestT = t;
             }
         }
-        DMatrixSparseCSC j = matrix(new double[][] {{-1, k}, {0, -2}});
-        DMatrixSparseCSC m = matrix(new double[][] {{1, 0}, {0, 1}});
-        // numerical abscissa of A: λ_max of [[−1, 5], [5, −2]] = −1.5 + √(0.25 + 25) (analytic)
+        // M = diag(4, 1), J = M [[−1, K/2], [0, −2]]: A = M⁻¹J and the M-norm of e^{tA} is the 2-norm of
+        // M^{1/2} e^{tA} M^{−1/2}, the same triangular exponential with K/2 scaled by √(4/1), i.e. K (analytic)
+        DMatrixSparseCSC j = matrix(new double[][] {{-4, 2 * k}, {0, -2}});
+        DMatrixSparseCSC m = matrix(new double[][] {{4, 0}, {0, 1}});
+        // numerical abscissa: λ_max of [[−1, 5], [5, −2]] = −1.5 + √(0.25 + 25) (analytic)
         double omega = -1.5 + Math.sqrt(25.25);
         TransientGrowth.Result r = TransientGrowth.search(j, m, new double[] {1, 1}, -1.0, omega, 100000);
         // Crank–Nicolson with t/32 steps: relative error ~ (λ t/32)²/12 ≈ 1e-4 near the peak
