@@ -53,5 +53,13 @@ class CasesTest {
             assertTrue(e.get("residual").asDouble() < 1e-8, "eigenpair residual in " + file);
         }
         assertTrue(j.get("cautions").size() >= 3, "safety cautions present");
+        // spectral abscissa <= numerical abscissa <= a-priori bound (Rayleigh quotient and Weyl's inequality;
+        // common practice, no source), to round-off of the eigen-solvers
+        JsonNode en = j.get("energy");
+        double alpha = en.get("spectral_abscissa").asDouble();
+        double omega = en.get("numerical_abscissa").asDouble();
+        double bound = en.get("bound").asDouble();
+        double tol = 1e-9 * Math.max(1, Math.abs(bound));
+        assertTrue(alpha <= omega + tol && omega <= bound + tol, file + ": " + alpha + " <= " + omega + " <= " + bound);
     }
 }

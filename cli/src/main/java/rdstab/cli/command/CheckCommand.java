@@ -67,12 +67,24 @@ public final class CheckCommand implements Callable<Integer> {
     @Option(names = "--force", description = "Overwrite existing result files (--out, --plots, --vtk, --report).")
     boolean force;
 
+    @Option(names = "--amplification-budget", paramLabel = "N",
+            description = "Largest number of linear solves (time steps) spent on the peak energy amplification when the "
+                + "spectrum decays but the energy can grow; 0 skips it (default: the case's analysis key, else 20000).")
+    Integer amplificationBudget;
+
     @Option(names = "--debug", description = "Show stack traces on errors.")
     boolean debug;
 
     @Override
     public Integer call() throws Exception {
         Case c = caseOptions.load();
+        if (amplificationBudget != null) {
+            if (amplificationBudget < 0) {
+                throw new rdstab.solver.error.InputException("command line", "--amplification-budget",
+                        "expected a whole number >= 0, found " + amplificationBudget);
+            }
+            c = c.withAnalysis(c.analysis().withAmplificationBudget(amplificationBudget));
+        }
         PrintWriter w = spec.commandLine().getOut();
         CheckResult r;
         try {

@@ -10,7 +10,9 @@ import rdstab.solver.eigen.EigenPair;
 
 /**
  * The files of one check: base.csv (coordinates and the base state per node), modes.csv (each mode's
- * real and imaginary part per field and node, normalised to unit max amplitude), eigenvalues.csv and
+ * real and imaginary part per field and node, normalised to unit max amplitude and zero phase at its peak,
+ * with amplitude √(re² + im²) and phase atan2(im, re) in radians: the disturbance of an oscillating mode
+ * at node i is amp_i e^{Re λ t} cos(Im λ t + phase_i)), eigenvalues.csv and
  * result.json. CSV: comma-separated, one header line, numbers in Java's round-trip decimal form.
  */
 public final class ResultFiles {
@@ -56,7 +58,7 @@ public final class ResultFiles {
         return sb.toString();
     }
 
-    /** modes.csv text: columns mode{k}_{field}_re and _im, each mode scaled to max amplitude 1. */
+    /** modes.csv text: columns mode{k}_{field}_re, _im, _amp and _phase, each mode scaled to max amplitude 1. */
     public static String modesCsv(CheckResult r) {
         Discretization d = r.problem().full();
         List<String> names = r.problem().theCase().fieldNames();
@@ -72,6 +74,8 @@ public final class ResultFiles {
             for (String n : names) {
                 sb.append(",mode").append(m + 1).append('_').append(n).append("_re");
                 sb.append(",mode").append(m + 1).append('_').append(n).append("_im");
+                sb.append(",mode").append(m + 1).append('_').append(n).append("_amp");
+                sb.append(",mode").append(m + 1).append('_').append(n).append("_phase");
             }
         }
         sb.append('\n');
@@ -79,7 +83,10 @@ public final class ResultFiles {
             coords(sb, d, i);
             for (int m = 0; m < k; m++) {
                 for (int f = 0; f < names.size(); f++) {
-                    sb.append(',').append(re[m][f][i]).append(',').append(im[m][f][i]);
+                    double a = re[m][f][i];
+                    double b = im[m][f][i];
+                    sb.append(',').append(a).append(',').append(b).append(',').append(Math.hypot(a, b))
+                      .append(',').append(Math.atan2(b, a));
                 }
             }
             sb.append('\n');

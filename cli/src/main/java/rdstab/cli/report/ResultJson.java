@@ -67,6 +67,13 @@ public final class ResultJson {
         energy.put("poincare", num(r.energy().poincare()));
         energy.put("reaction_rate", num(r.energy().reactionRate()));
         energy.put("weights", r.energy().weights());
+        energy.put("weight_choice", r.energy().weightChoice());
+        energy.put("unit_weight_bound", num(r.energy().unitWeightBound()));
+        energy.put("poincare_analytic", num(r.energy().analyticPoincare()));
+        energy.put("poincare_source", r.energy().poincareSource());
+        energy.put("peak_amplification", num(r.energy().peakAmplification()));
+        energy.put("peak_time", num(r.energy().peakTime()));
+        energy.put("amplification_note", r.energy().amplificationNote());
         energy.put("verdict", a.energyVerdict());
         m.put("energy", energy);
         m.put("unknowns", r.problem().full().unknowns());
@@ -88,6 +95,7 @@ public final class ResultJson {
         if (PhysicalTerms.applies(r)) {
             m.put("physical", PhysicalTerms.toMap(r));
         }
+        PatternReport.put(r, m);
         return m;
     }
 

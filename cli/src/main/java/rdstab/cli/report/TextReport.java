@@ -63,8 +63,10 @@ public final class TextReport {
         w.printf(Locale.ROOT, "  spectral abscissa    %s%n", sig(a.growthRate(), 8));
         w.printf(Locale.ROOT, "  numerical abscissa   %s   (sharp energy rate: ‖u(t)‖ ≤ e^(rate·t) ‖u(0)‖)%n",
                 sig(en.numericalAbscissa(), 8));
-        w.printf(Locale.ROOT, "  a-priori bound       %s   (= −μ₁ + max reaction rate = −%s + %s)%n", sig(en.bound(), 8),
-                sig(en.poincare(), 6), sig(en.reactionRate(), 6));
+        w.printf(Locale.ROOT, "  a-priori bound       %s   (= −μ₁ + max reaction rate = %s + %s)%n", sig(en.bound(), 8),
+                sig(-en.poincare(), 6), sig(en.reactionRate(), 6));
+        energyDetails(en, w);
+        PatternReport.write(r, w);
         if (!a.warnings().isEmpty()) {
             w.println();
             w.println("Warnings");
@@ -96,6 +98,31 @@ public final class TextReport {
             w.println("  - " + s);
         }
         w.flush();
+    }
+
+    /** Weights, the Poincaré constant beside its closed form, and the peak amplification. */
+    static void energyDetails(EnergyRates en, PrintWriter w) {
+        StringBuilder ws = new StringBuilder("[");
+        double[] wt = en.weights();
+        for (int i = 0; i < wt.length; i++) {
+            ws.append(i == 0 ? "" : ", ").append(sig(wt[i], 4));
+        }
+        ws.append(']');
+        w.printf(Locale.ROOT, "  energy weights       %s (%s; E = ½ Σ w_f ‖u_f‖²)%s%n", ws, en.weightChoice(),
+                en.unitWeightBound() != en.bound() ? "; bound with unit weights " + sig(en.unitWeightBound(), 6) : "");
+        if (Double.isFinite(en.analyticPoincare())) {
+            w.printf(Locale.ROOT, "  Poincaré μ₁          %s computed, %s analytic (%s)%n", sig(en.poincare(), 8),
+                    sig(en.analyticPoincare(), 8), en.poincareSource());
+        } else {
+            w.printf(Locale.ROOT, "  Poincaré μ₁          %s computed (no closed form for this shape, coefficients or conditions)%n",
+                    sig(en.poincare(), 8));
+        }
+        if (Double.isFinite(en.peakAmplification()) && en.peakTime() > 0) {
+            w.printf(Locale.ROOT, "  peak amplification   %s at t ≈ %s (max ‖e^(tA)‖ in the energy norm; %s)%n",
+                    sig(en.peakAmplification(), 6), sig(en.peakTime(), 4), en.amplificationNote());
+        } else {
+            w.printf(Locale.ROOT, "  peak amplification   %s%n", en.amplificationNote());
+        }
     }
 
     static String meaning(Verdict v) {

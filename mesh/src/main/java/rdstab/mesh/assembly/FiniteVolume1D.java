@@ -31,8 +31,12 @@ import rdstab.mesh.grid.Grid1D;
  *   of its neighbour;</li>
  *   <li>absent ({@code null}): allowed only at a symmetry centre (a = 0, cylinder or sphere), where
  *   A_b = 0 closes the flux;</li>
- *   <li>{@link BoundaryCondition.Inlet}: not implemented yet (the constructor throws
- *   {@link UnsupportedOperationException}).</li>
+ *   <li>{@link BoundaryCondition.Inlet}(u_in), the Danckwerts inlet of a flow reactor: with the inflow
+ *   speed c_in = c·(−n) &gt; 0 (c(x_0) at the left end, −c(x_N) at the right end) the condition
+ *   c_in (u − u_in) = −k ∂u/∂n, i.e. c(u − u_in) = k u_x at a left inlet (scaled: u − u_x/Pe = u_in),
+ *   is a Robin condition with h = c_in: B = −A_b c_in (u − u_in), ∂B/∂u = −A_b c_in. It needs a drift
+ *   pointing into the body at that end (else {@link IllegalArgumentException}). The outlet condition
+ *   u_x = 0 is {@link BoundaryCondition.FixedFlux}(0).</li>
  * </ul>
  * (D u)_i is the drift derivative of the chosen {@link DriftScheme}. The weight matrix is lumped,
  * M = diag(w_i) per field, so without drift and with a constant or field-independent k the
@@ -108,6 +112,34 @@ public final class FiniteVolume1D implements Discretization {
         }
         this.unknowns = count;
         this.driftVelocity = kernel.hasDrift() ? tabulateDrift() : null;
+        checkInlets();
+    }
+
+    /** Every inlet needs a drift that enters the body at its end. */
+    private void checkInlets() {
+        for (int f = 0; f < nf; f++) {
+            for (int side = 0; side < 2; side++) {
+                BoundaryCondition bc = side == 0 ? left[f] : right[f];
+                if (!(bc instanceof BoundaryCondition.Inlet)) {
+                    continue;
+                }
+                double cin = inflowSpeed(side == 0 ? 0 : nn - 1, f);
+                if (!(cin > 0)) {
+                    throw new IllegalArgumentException("the inlet condition of field " + f + " at the "
+                            + (side == 0 ? "left" : "right") + " end needs a drift into the body there ("
+                            + (side == 0 ? "c > 0" : "c < 0") + "), got c = "
+                            + (driftVelocity == null ? 0.0 : driftVelocity[side == 0 ? 0 : nn - 1][f]));
+                }
+            }
+        }
+    }
+
+    /** Inflow speed c·(−n) of field f at an end node (0 without drift). */
+    private double inflowSpeed(int node, int f) {
+        if (driftVelocity == null) {
+            return 0.0;
+        }
+        return node == 0 ? driftVelocity[0][f] : -driftVelocity[nn - 1][f];
     }
 
     private BoundaryCondition[] checkConditions(BoundaryCondition[] bcs, String side, boolean centre) {
@@ -121,9 +153,6 @@ public final class FiniteVolume1D implements Discretization {
         BoundaryCondition[] out = bcs.clone();
         for (int f = 0; f < nf; f++) {
             BoundaryCondition bc = out[f];
-            if (bc instanceof BoundaryCondition.Inlet) {
-                throw new UnsupportedOperationException("inlet condition not implemented yet");
-            }
             if (centre) {
                 if (bc != null && !(bc instanceof BoundaryCondition.FixedFlux ff && ff.outflux() == 0.0)) {
                     throw new IllegalArgumentException("at the symmetry centre r = 0 the left condition of field " + f
@@ -297,14 +326,17 @@ public final class FiniteVolume1D implements Discretization {
             System.arraycopy(st.k, 0, kFrozen[i], 0, nf);
         }
         return new FiniteVolume1D(grid, new FrozenDiffusionKernel(grid.nodes(), kFrozen),
-                homogeneous(left), homogeneous(right), faceAverage, driftScheme);
+                homogeneous(left, 0), homogeneous(right, nn - 1), faceAverage, driftScheme);
     }
 
-    private static BoundaryCondition[] homogeneous(BoundaryCondition[] bcs) {
+    /** Homogeneous copies; an inlet becomes the Robin condition it is, Convective(c_in, 0). */
+    private BoundaryCondition[] homogeneous(BoundaryCondition[] bcs, int node) {
         BoundaryCondition[] out = new BoundaryCondition[bcs.length];
         for (int f = 0; f < bcs.length; f++) {
             BoundaryCondition bc = bcs[f];
-            if (bc instanceof BoundaryCondition.FixedValue) {
+            if (bc instanceof BoundaryCondition.Inlet) {
+                out[f] = new BoundaryCondition.Convective(inflowSpeed(node, f), 0.0);
+            } else if (bc instanceof BoundaryCondition.FixedValue) {
                 out[f] = new BoundaryCondition.FixedValue(0.0);
             } else if (bc instanceof BoundaryCondition.FixedFlux) {
                 out[f] = new BoundaryCondition.FixedFlux(0.0);
@@ -491,6 +523,10 @@ public final class FiniteVolume1D implements Discretization {
         } else if (bc instanceof BoundaryCondition.Convective cv) {
             out.addF(node, f, -ab * cv.h() * (nodal[f][node] - cv.ambient()));
             out.addJ(node, f, node, f, -ab * cv.h());
+        } else if (bc instanceof BoundaryCondition.Inlet in) {
+            double cin = inflowSpeed(node, f);
+            out.addF(node, f, -ab * cin * (nodal[f][node] - in.inletValue()));
+            out.addJ(node, f, node, f, -ab * cin);
         }
         // FixedValue: not a row; null: centre, A_b = 0.
     }

@@ -44,10 +44,10 @@ class FiniteVolume1DValidationTest {
     }
 
     @Test
-    void inletIsNotImplementedYet() {
-        UnsupportedOperationException e = assertThrows(UnsupportedOperationException.class,
+    void inletWithoutDriftIsRefused() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> new FiniteVolume1D(SLAB, Kernels.linear(1, 0), new BoundaryCondition[] {new Inlet(1)}, ZERO));
-        assertEquals("inlet condition not implemented yet", e.getMessage());
+        assertTrue(e.getMessage().contains("inlet condition of field 0 at the left end needs a drift"), e.getMessage());
     }
 
     @Test

@@ -98,4 +98,25 @@ final class Kernels {
             }
         };
     }
+
+    /** One field: constant diffusivity k, linear source s = a·u + b, constant drift c. */
+    static PointKernel linearDrift(double k, double a, double b, double c) {
+        return new PointKernel() {
+            @Override public int fieldCount() { return 1; }
+
+            @Override public void source(double[] x, double[] u, double[] s, double[][] dsdu) {
+                s[0] = a * u[0] + b;
+                dsdu[0][0] = a;
+            }
+
+            @Override public void diffusivity(double[] x, double[] u, double[] kk, double[][] dkdu) {
+                kk[0] = k;
+                dkdu[0][0] = 0;
+            }
+
+            @Override public double drift(int field, double[] x, int dir) { return c; }
+
+            @Override public boolean hasDrift() { return c != 0.0; }
+        };
+    }
 }

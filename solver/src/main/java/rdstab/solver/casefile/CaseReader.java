@@ -58,7 +58,7 @@ public final class CaseReader {
     private static final Set<String> STRETCH = Set.of("toward", "strength");
     private static final Set<String> FIELD = Set.of("name", "unit", "diffusivity", "source", "initial", "drift");
     private static final Set<String> ANALYSIS = Set.of("modes", "shift", "newton-tolerance", "newton-max-steps",
-            "eigen-tolerance", "marginal-band", "residual-limit");
+            "eigen-tolerance", "marginal-band", "residual-limit", "drift-scheme", "energy-weights", "amplification-budget");
     private static final Set<String> RESERVED = Set.of("x", "y", "r", "pi", "exp", "log", "sqrt", "sin", "cos",
             "tan", "tanh", "abs", "min", "max", "pow", "sign");
 
@@ -226,7 +226,8 @@ public final class CaseReader {
             List<FieldSpec> fields = model != null ? model.fields() : readFields(require(root, top, "fields"), shape);
             Map<String, Map<String, BoundarySpec>> bcs = model != null ? model.boundaries()
                     : readBoundaries(require(root, top, "boundaries"), shape, from.value(parameters) == 0.0, fields, parts);
-            AnalysisSpec analysis = top.containsKey("analysis") ? readAnalysis(top.get("analysis")) : AnalysisSpec.defaults();
+            AnalysisSpec analysis = top.containsKey("analysis") ? readAnalysis(top.get("analysis"), fields.size())
+                    : AnalysisSpec.defaults();
             PhysicalInputs physical = new PhysicalInputs(units, derived, model == null ? null : model.model());
             return new Case(source, title, about, shape, from, to, fromY, toY, mesh, parameters, fields, bcs, analysis,
                     physical, plane);
@@ -438,11 +439,29 @@ public final class CaseReader {
                 }
                 Formula s = f.containsKey("source") ? formula(f.get("source"), withFields, places, "source") : Formula.parse("0");
                 Formula u0 = f.containsKey("initial") ? formula(f.get("initial"), noFields, places, "initial") : Formula.parse("0");
+                if (f.containsKey("drift")) {
+                    checkNoFieldIn(f.get("drift"), names, "drift", "a drift may depend on position and parameters only");
+                }
                 Formula c = f.containsKey("drift") ? formula(f.get("drift"), noFields, places, "drift") : null;
                 String unit = f.containsKey("unit") ? f.get("unit").text() : "";
                 out.add(new FieldSpec(names.get(i), unit, k, s, u0, c, places));
             }
             return out;
+        }
+
+        /** Refuses a formula that names a field where fields are not allowed, with the reason. */
+        private void checkNoFieldIn(CaseNode node, List<String> fieldNames, String key, String why) {
+            Formula f;
+            try {
+                f = Formula.parse(node.text());
+            } catch (FormulaException e) {
+                return; // reported with its position by formula()
+            }
+            for (String n : f.names()) {
+                if (fieldNames.contains(n)) {
+                    throw formulaError(node, firstOccurrence(node.text(), n), key + " formula names the field '" + n + "'; " + why);
+                }
+            }
         }
 
         private Formula formula(CaseNode node, Set<String> allowed, Map<String, String> places, String key) {
@@ -521,14 +540,14 @@ public final class CaseReader {
                 String w = c.text().trim();
                 BoundarySpec.Kind k = BoundarySpec.Kind.byWord(w);
                 if (k == null || k.keys().length > 0) {
-                    throw c.error("expected 'insulated', or a mapping such as {fixed: 0}, {flux: q}, "
+                    throw c.error("expected 'insulated' or 'outlet', or a mapping such as {fixed: 0}, {flux: q}, "
                             + "{convective: {h: Bi, ambient: 0}} or {inlet: 1}; found '" + w + "'");
                 }
                 return new BoundarySpec(k, Map.of(), c.place());
             }
             Map<String, CaseNode> e = c.entries();
             if (e.size() != 1) {
-                throw c.error("a condition is one of fixed, flux, insulated, convective, inlet; found " + e.size() + " keys");
+                throw c.error("a condition is one of fixed, flux, insulated, convective, inlet, outlet; found " + e.size() + " keys");
             }
             Map.Entry<String, CaseNode> only = e.entrySet().iterator().next();
             BoundarySpec.Kind k = BoundarySpec.Kind.byWord(only.getKey());
@@ -559,7 +578,7 @@ public final class CaseReader {
             return new BoundarySpec(k, numbers, c.place());
         }
 
-        private AnalysisSpec readAnalysis(CaseNode node) {
+        private AnalysisSpec readAnalysis(CaseNode node, int fieldCount) {
             Map<String, CaseNode> a = node.entries(ANALYSIS);
             AnalysisSpec d = AnalysisSpec.defaults();
             int modes = a.containsKey("modes") ? a.get("modes").integer(1, 200) : d.modes();
@@ -575,7 +594,29 @@ public final class CaseReader {
             }
             double mb = a.containsKey("marginal-band") ? positive(a.get("marginal-band")) : d.marginalBand();
             double rl = a.containsKey("residual-limit") ? positive(a.get("residual-limit")) : d.residualLimit();
-            return new AnalysisSpec(modes, shift, nt, ns, et, mb, rl);
+            String scheme = "centred";
+            if (a.containsKey("drift-scheme")) {
+                scheme = a.get("drift-scheme").text().trim();
+                if (!scheme.equals("centred") && !scheme.equals("upwind")) {
+                    throw a.get("drift-scheme").error("drift-scheme must be centred or upwind, found '" + scheme + "'");
+                }
+            }
+            double[] weights = a.containsKey("energy-weights") ? weights(a.get("energy-weights"), fieldCount) : null;
+            int budget = a.containsKey("amplification-budget") ? a.get("amplification-budget").integer(0, 100_000_000)
+                    : AnalysisSpec.DEFAULT_AMPLIFICATION_BUDGET;
+            return new AnalysisSpec(modes, shift, nt, ns, et, mb, rl, scheme, weights, budget);
+        }
+
+        private double[] weights(CaseNode node, int fieldCount) {
+            List<CaseNode> items = node.items();
+            if (items.size() != fieldCount) {
+                throw node.error("energy-weights needs one weight per field (" + fieldCount + "), found " + items.size());
+            }
+            double[] w = new double[fieldCount];
+            for (int i = 0; i < fieldCount; i++) {
+                w[i] = positive(items.get(i));
+            }
+            return w;
         }
 
         private double positive(CaseNode n) {

@@ -163,6 +163,17 @@ public final class CaseWriter {
         a.put("eigen-tolerance", c.analysis().eigenTolerance());
         a.put("marginal-band", c.analysis().marginalBand());
         a.put("residual-limit", c.analysis().residualLimit());
+        if (c.analysis().driftScheme() != null) {
+            a.put("drift-scheme", c.analysis().driftScheme());
+        }
+        if (c.analysis().energyWeights() != null) {
+            List<Object> w = new ArrayList<>();
+            for (double x : c.analysis().energyWeights()) {
+                w.add(x);
+            }
+            a.put("energy-weights", w);
+        }
+        a.put("amplification-budget", c.analysis().amplificationBudget());
         return a;
     }
 

@@ -6,6 +6,8 @@ import rdstab.solver.assess.Assessment;
 import rdstab.solver.eigen.EigenPair;
 import rdstab.solver.energy.EnergyRates;
 import rdstab.solver.newton.BaseState;
+import rdstab.solver.pattern.DispersionRelation;
+import rdstab.solver.pattern.PecletNumbers;
 import rdstab.solver.setup.Problem;
 
 /**
@@ -21,8 +23,19 @@ import rdstab.solver.setup.Problem;
  * @param energy           energy-method rates
  * @param assessment       verdict and what it means
  * @param seconds          wall time per stage: "base", "spectrum", "energy"
+ * @param flow             Péclet numbers of the fields with drift and the drift scheme (null when not 1D)
+ * @param dispersion       dispersion relation about a uniform base state (null when not 1D; applies() false
+ *                         when the base state is not uniform or the domain does not allow it)
  */
 public record CheckResult(Problem problem, BaseState base, double[][] baseNodal, Map<String, Double> baseMax,
                           List<EigenPair> modes, double shift, boolean rightmostCertified, EnergyRates energy,
-                          Assessment assessment, Map<String, Double> seconds) {
+                          Assessment assessment, Map<String, Double> seconds, PecletNumbers.Result flow,
+                          DispersionRelation.Result dispersion) {
+
+    /** Without transport numbers and dispersion relation. */
+    public CheckResult(Problem problem, BaseState base, double[][] baseNodal, Map<String, Double> baseMax,
+                       List<EigenPair> modes, double shift, boolean rightmostCertified, EnergyRates energy,
+                       Assessment assessment, Map<String, Double> seconds) {
+        this(problem, base, baseNodal, baseMax, modes, shift, rightmostCertified, energy, assessment, seconds, null, null);
+    }
 }

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import org.ejml.data.DMatrixSparseCSC;
 import rdstab.mesh.assembly.Discretization;
+import rdstab.mesh.assembly.FiniteVolume1D;
 import rdstab.solver.assess.Assessment;
 import rdstab.solver.assess.SafetyCautions;
 import rdstab.solver.assess.Verdict;
@@ -16,6 +17,8 @@ import rdstab.solver.eigen.EigenSolvers;
 import rdstab.solver.eigen.Spectrum;
 import rdstab.solver.energy.EnergyAnalysis;
 import rdstab.solver.energy.EnergyRates;
+import rdstab.solver.energy.PoincareConstant;
+import rdstab.solver.energy.TransientGrowth;
 import rdstab.solver.error.ConvergenceException;
 import rdstab.solver.error.ConvergenceException.Reason;
 import rdstab.solver.model.AnalysisSpec;
@@ -23,6 +26,8 @@ import rdstab.solver.model.Case;
 import rdstab.solver.newton.BaseState;
 import rdstab.solver.newton.DampedNewton;
 import rdstab.solver.newton.SourceHomotopy;
+import rdstab.solver.pattern.DispersionRelation;
+import rdstab.solver.pattern.PecletNumbers;
 import rdstab.solver.setup.Problem;
 import rdstab.solver.setup.ProblemBuilder;
 
@@ -67,7 +72,7 @@ public final class StabilityCheck {
         List<String> warnings = new ArrayList<>();
         List<EigenPair> modes = trusted(spectrum.pairs(), a.residualLimit(), warnings);
         DMatrixSparseCSC t = p.transport().jacobian(base.u());
-        EnergyRates energy = EnergyAnalysis.compute(d, j, t, m);
+        EnergyRates energy = energy(c, d, j, t, m, modes.get(0).re(), a);
         seconds.put("energy", (System.nanoTime() - t2) * 1e-9);
         if (!"newton".equals(base.route())) {
             warnings.add("Newton's method failed from the case's initial guess; the base state was reached by "
@@ -86,8 +91,48 @@ public final class StabilityCheck {
             }
             max.put(c.fields().get(f).name(), mx);
         }
+        PecletNumbers.Result flow = null;
+        DispersionRelation.Result dispersion = null;
+        if (d instanceof FiniteVolume1D fv) {
+            flow = PecletNumbers.of(fv, c.fieldNames(), base.u());
+            if (flow.warning() != null) {
+                warnings.add(flow.warning());
+            }
+            dispersion = DispersionRelation.of(fv, base.u());
+        }
         Assessment as = assess(c, d, modes, energy, j, m, warnings);
-        return new CheckResult(p, base, nodal, max, modes, spectrum.shift(), spectrum.rightmostCertified(), energy, as, seconds);
+        return new CheckResult(p, base, nodal, max, modes, spectrum.shift(), spectrum.rightmostCertified(), energy, as, seconds,
+                flow, dispersion);
+    }
+
+    /**
+     * The energy rates in the case's weights (or chosen ones), the analytic Poincaré constant where the shape
+     * allows, and — when the spectrum decays but the energy rate is positive — the peak amplification.
+     */
+    static EnergyRates energy(Case c, Discretization d, DMatrixSparseCSC j, DMatrixSparseCSC t, DMatrixSparseCSC m,
+                              double spectralAbscissa, AnalysisSpec a) {
+        EnergyRates e = EnergyAnalysis.compute(d, j, t, m, a.energyWeights());
+        PoincareConstant.Value pc = PoincareConstant.of(c);
+        e = e.withPoincare(pc.mu(), pc.source());
+        double band = a.marginalBand();
+        if (e.selfAdjoint() || e.numericalAbscissa() <= 0) {
+            return e.withAmplification(1.0, 0.0, "1 at t = 0: the energy never grows (numerical abscissa ≤ 0"
+                    + (e.selfAdjoint() ? ", self-adjoint operator)" : ")"));
+        }
+        if (!(spectralAbscissa < -band)) {
+            return e.withAmplification(Double.NaN, Double.NaN, "not computed: the spectrum is not stable, growth is unbounded");
+        }
+        if (a.amplificationBudget() <= 0 || !d.massIsDiagonal()) {
+            return e.withAmplification(Double.NaN, Double.NaN, a.amplificationBudget() <= 0
+                    ? "not computed (amplification budget 0)" : "not computed (needs a lumped weight matrix)");
+        }
+        double[] wu = EnergyAnalysis.perUnknown(e.weights(), EnergyAnalysis.fieldOfUnknown(d));
+        TransientGrowth.Result r = TransientGrowth.search(j, m, wu, spectralAbscissa, e.numericalAbscissa(),
+                a.amplificationBudget());
+        String note = String.format(java.util.Locale.ROOT, "power iteration on Crank–Nicolson propagators, %d linear solves%s%s",
+                r.solves(), r.budgetSpent() ? "; budget spent, the peak may be higher (raise --amplification-budget)" : "",
+                r.atWindowEnd() ? "; peak at the end of the searched window, it may come later" : "");
+        return e.withAmplification(r.peak(), r.time(), note);
     }
 
     /** Newton from the guess; failure becomes NO_STEADY_STATE with the reason kept in the message. */
@@ -156,8 +201,10 @@ public final class StabilityCheck {
             energyVerdict = "energy-stable: every disturbance decays from the start";
         } else if (v == Verdict.STABLE) {
             energyVerdict = "modally stable, transient growth possible";
+            String by = Double.isFinite(energy.peakAmplification()) ? String.format(java.util.Locale.ROOT,
+                    " (energy-norm amplification up to %.4g at t ≈ %.3g)", energy.peakAmplification(), energy.peakTime()) : "";
             warnings.add("the energy rate is positive while every mode decays: some disturbances grow for a while "
-                    + "before they decay (transient growth)");
+                    + "before they decay (transient growth)" + by);
         } else {
             energyVerdict = v == Verdict.UNSTABLE ? "unstable" : "marginal: the energy rate is not negative";
         }

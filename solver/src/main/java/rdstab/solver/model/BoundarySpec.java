@@ -22,7 +22,9 @@ public record BoundarySpec(Kind kind, Map<String, Quantity> numbers, String plac
         /** −k ∂u/∂n = h (u − ambient). */
         CONVECTIVE("convective", "h", "ambient"),
         /** Danckwerts inlet of a flow reactor: the entering total flux equals drift × value. */
-        INLET("inlet", "value");
+        INLET("inlet", "value"),
+        /** Outlet of a flow reactor: zero diffusive flux, ∂u/∂n = 0 (the drift carries the field out). */
+        OUTLET("outlet");
 
         private final String word;
         private final String[] keys;

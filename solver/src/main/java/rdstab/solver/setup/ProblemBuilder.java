@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import rdstab.mesh.assembly.Discretization;
+import rdstab.mesh.assembly.DriftScheme;
+import rdstab.mesh.assembly.FaceAverage;
 import rdstab.mesh.assembly.FiniteVolume1D;
 import rdstab.mesh.assembly.PointKernel;
 import rdstab.mesh.boundary.BoundaryCondition;
@@ -31,6 +33,7 @@ public final class ProblemBuilder {
         if (c.shape().dimension() == 2) {
             return PlaneProblems.build(c);
         }
+        checkDiffusivities(c);
         Grid1D grid = grid(c);
         FormulaKernel kernel = new FormulaKernel(c);
         int nf = c.fields().size();
@@ -53,7 +56,8 @@ public final class ProblemBuilder {
 
     private static Discretization discretize(Case c, Grid1D grid, PointKernel k, BoundaryCondition[] l, BoundaryCondition[] r) {
         try {
-            return new FiniteVolume1D(grid, k, l, r);
+            DriftScheme scheme = "upwind".equals(c.analysis().driftScheme()) ? DriftScheme.UPWIND : DriftScheme.CENTRED;
+            return new FiniteVolume1D(grid, k, l, r, FaceAverage.ARITHMETIC, scheme);
         } catch (IllegalArgumentException e) {
             if (e instanceof InputException) {
                 throw e;
@@ -99,11 +103,12 @@ public final class ProblemBuilder {
                 case CONVECTIVE -> new BoundaryCondition.Convective(s.numbers().get("h").value(p),
                         s.numbers().get("ambient").value(p));
                 case INLET -> {
-                    if (field.drift() == null) {
-                        throw new InputException(c.source(), s.place(), "an inlet condition needs a field with drift; field '"
-                                + field.name() + "' has none");
-                    }
+                    requireDrift(c, s, field, "an inlet");
                     yield new BoundaryCondition.Inlet(s.numbers().get("value").value(p));
+                }
+                case OUTLET -> {
+                    requireDrift(c, s, field, "an outlet");
+                    yield new BoundaryCondition.FixedFlux(0.0);
                 }
             };
         } catch (IllegalArgumentException e) {
@@ -111,6 +116,24 @@ public final class ProblemBuilder {
                 throw e;
             }
             throw new InputException(c.source(), s.place(), e.getMessage());
+        }
+    }
+
+    private static void requireDrift(Case c, BoundarySpec s, FieldSpec field, String what) {
+        if (field.drift() == null) {
+            throw new InputException(c.source(), s.place(), what + " condition needs a field with drift; field '"
+                    + field.name() + "' has none");
+        }
+    }
+
+    /** Diffusivities that are numbers or formulas of parameters must be &gt; 0 at the current values (after --set). */
+    private static void checkDiffusivities(Case c) {
+        for (FieldSpec f : c.fields()) {
+            rdstab.solver.formula.Formula k = f.diffusivity().substitute(c.parameters());
+            if (k.isConstant() && !(k.constantValue() > 0 && Double.isFinite(k.constantValue()))) {
+                throw new InputException(c.source(), f.placeOf("diffusivity"), "the diffusivity of field '" + f.name()
+                        + "' (" + f.diffusivity() + ") is " + k.constantValue() + " at the current parameters; it must be a finite number > 0");
+            }
         }
     }
 
