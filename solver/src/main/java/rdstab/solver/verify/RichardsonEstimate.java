@@ -11,8 +11,8 @@ import java.util.Locale;
  * r32 = h3/h2 (cell-count ratios of a uniformly refined grid), ε21 = f2 − f1, ε32 = f3 − f2:
  * <pre>
  *   p      = ln(ε32/ε21) / ln r                     (constant ratio r = r21 = r32)
- *   p      = |ln|ε32/ε21| + q(p)| / ln r21,  q(p) = ln((r21^p − s)/(r32^p − s)),  s = sign(ε32/ε21)
- *                                                   (unequal ratios, solved by fixed-point iteration)
+ *   p      = |ln|ε32/ε21| + q(p)| / ln r21,  q(p) = ln((r21^p − 1)/(r32^p − 1))
+ *                                                   (unequal ratios; solved for p by bisection)
  *   f_ext  = f1 + (f1 − f2)/(r21^p − 1)
  *   GCI_fine   = Fs |ε21| / (r21^p − 1)            band of f1 (absolute, in the quantity's units)
  *   GCI_medium = Fs |ε21| r21^p / (r21^p − 1)      band of f2 (Roache's coarse-grid index of the finest pair)
@@ -125,25 +125,38 @@ public record RichardsonEstimate(double f1, double f2, double f3, double r21, do
     }
 
     /**
-     * Observed order from ε32/ε21 &gt; 0: explicit for equal ratios, else the fixed-point iteration of
-     * Celik et al. (at most 50 sweeps, stopped at a change below 1e-12).
+     * Observed order from ε32/ε21 &gt; 0: explicit for equal ratios; for unequal ratios the root of
+     * g(p) = ln(r21^p (r32^p − 1)/(r21^p − 1)) − ln(ε32/ε21), which is Celik et al.'s fixed-point equation rewritten,
+     * found by bisection on [1e-6, 50] to 1e-13 (the fixed-point iteration itself converges slowly when r21 ≈ r32).
+     * NaN when there is no root in that range.
      */
     static double observedOrder(double ratio, double r21, double r32) {
-        double lr = Math.log(r21);
-        double p = Math.log(ratio) / lr;
         if (Math.abs(r21 - r32) <= 1e-12 * r21) {
-            return p;
+            return Math.log(ratio) / Math.log(r21);
         }
-        p = Math.abs(p);
-        for (int it = 0; it < 50; it++) {
-            double q = Math.log((Math.pow(r21, p) - 1) / (Math.pow(r32, p) - 1));
-            double next = Math.abs(Math.log(ratio) + q) / lr;
-            if (Math.abs(next - p) <= 1e-12 * Math.max(1, p)) {
-                return next;
+        double target = Math.log(ratio);
+        double lo = 1e-6;
+        double hi = 50;
+        double glo = g(lo, r21, r32) - target;
+        double ghi = g(hi, r21, r32) - target;
+        if (glo * ghi > 0) {
+            return Double.NaN;
+        }
+        for (int it = 0; it < 200 && hi - lo > 1e-13 * hi; it++) {
+            double mid = 0.5 * (lo + hi);
+            double gm = g(mid, r21, r32) - target;
+            if ((gm < 0) == (glo < 0)) {
+                lo = mid;
+                glo = gm;
+            } else {
+                hi = mid;
             }
-            p = next;
         }
-        return p;
+        return 0.5 * (lo + hi);
+    }
+
+    private static double g(double p, double r21, double r32) {
+        return p * Math.log(r21) + Math.log(Math.expm1(p * Math.log(r32)) / Math.expm1(p * Math.log(r21)));
     }
 
     /** True when the observed order was accepted (Fs = 1.25 and a tight band). */
