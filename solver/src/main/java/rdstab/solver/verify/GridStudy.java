@@ -25,9 +25,7 @@ import rdstab.solver.setup.ProblemBuilder;
  * <h2>Levels</h2>
  * {@link #refined}: the given cell count is the <em>coarsest</em> level and each further level has r times the cells
  * (rounded), so the finest is n·r^(L−1); it must not exceed {@link CaseReader#MAX_CELLS}. {@link #around}: three levels
- * n/r, n, n·r around a requested grid (the requested grid is the medium level); when n/r is not a whole number of at
- * least 4 cells, or n·r is above the cap, the three levels are shifted so the requested grid is the coarsest or the
- * finest, and the caller is told by the returned index. The refinement ratio used in the formulas is the actual cell
+ * n/r, n, n·r around a requested grid (the requested grid is the medium level; the finest when n·r is above the cap). The refinement ratio used in the formulas is the actual cell
  * ratio of consecutive levels (uniform and equally stretched grids refine every spacing by that ratio).
  *
  * <h2>Warm starts</h2>
@@ -75,24 +73,23 @@ public final class GridStudy {
     }
 
     /**
-     * Three levels around a requested grid; index 1 of the returned array is normally the requested one.
+     * Three levels around a requested grid: round(n/r), n, round(n·r) with the requested grid in the middle (index 1);
+     * when n·r would exceed the cell cap, round(n/r²), round(n/r), n with the requested grid finest (index 2). The
+     * ratios actually used are the cell ratios (unequal ratios are handled by {@link RichardsonEstimate}).
      *
-     * @return {cells of 3 levels..., index of the requested level} as a 4-element array
+     * @return {cells of the 3 levels, coarsest first, then the index of the requested level}
+     * @throws InputException when the coarsest level would have fewer than 4 cells
      */
     public static int[] around(int requested, double ratio) {
         checkRatio(ratio, 3);
-        double coarse = requested / ratio;
-        boolean coarseOk = Math.abs(coarse - Math.rint(coarse)) < 1e-9 && coarse >= 4;
         boolean fineOk = requested * ratio <= CaseReader.MAX_CELLS;
-        if (coarseOk && fineOk) {
-            return new int[] {(int) Math.rint(coarse), requested, (int) Math.round(requested * ratio), 1};
+        int[] c = fineOk ? new int[] {(int) Math.round(requested / ratio), requested, (int) Math.round(requested * ratio), 1}
+                : new int[] {(int) Math.round(requested / (ratio * ratio)), (int) Math.round(requested / ratio), requested, 2};
+        if (c[0] < 4 || c[0] >= c[1] || c[1] >= c[2]) {
+            throw new InputException("command line", "--cells", "a grid check around " + requested + " cells needs a coarser "
+                    + "level of at least 4 cells; use at least " + (int) Math.ceil(4 * ratio) + " cells");
         }
-        if (!fineOk) {
-            int[] c = refined((int) Math.max(2, Math.round(requested / (ratio * ratio))), 3, ratio);
-            return new int[] {c[0], c[1], requested, 2};
-        }
-        int[] c = refined(requested, 3, ratio);
-        return new int[] {c[0], c[1], c[2], 0};
+        return c;
     }
 
     private static void checkRatio(double ratio, int levels) {
