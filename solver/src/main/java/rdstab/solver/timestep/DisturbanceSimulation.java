@@ -172,7 +172,9 @@ public final class DisturbanceSimulation {
         }
         double steadyTol = 1e-6 * Math.abs(sigma) * Math.max(baseMax, Math.abs(a));
         Recorder rec = new Recorder(sys, d, base, w, thr, steadyTol, window);
-        rec.accepted(0, y0);
+        if (!rec.accepted(0, y0)) {
+            return classify(check, d, base, a, new Rosenbrock2.Outcome(0, y0, 0, 0, 0, true), rec, 0, 0, baseMax);
+        }
         Rosenbrock2 ros = new Rosenbrock2(sys);
         Rosenbrock2.Settings s = new Rosenbrock2.Settings(o.rtol(), 1e-3 * o.rtol() * Math.abs(a), window / 40, 1_000_000);
         Rosenbrock2.Outcome out = ros.integrate(y0, 0, window, window / 1000, s, rec);
