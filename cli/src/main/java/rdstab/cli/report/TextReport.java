@@ -20,6 +20,14 @@ public final class TextReport {
 
     /** Writes the report. */
     public static void write(CheckResult r, PrintWriter w) {
+        write(r, w, null);
+    }
+
+    /**
+     * Writes the report with an extra section (e.g. the grid study of check --verify) printed before the warnings and
+     * cautions, so the cautions stay last.
+     */
+    public static void write(CheckResult r, PrintWriter w, java.util.function.Consumer<PrintWriter> extra) {
         Case c = r.problem().theCase();
         Assessment a = r.assessment();
         w.println(c.title());
@@ -67,6 +75,9 @@ public final class TextReport {
                 sig(-en.poincare(), 6), sig(en.reactionRate(), 6));
         energyDetails(en, w);
         PatternReport.write(r, w);
+        if (extra != null) {
+            extra.accept(w);
+        }
         if (!a.warnings().isEmpty()) {
             w.println();
             w.println("Warnings");
