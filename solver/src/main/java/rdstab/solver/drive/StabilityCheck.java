@@ -79,8 +79,12 @@ public final class StabilityCheck {
                     + "continuation in the source strength from the source-free state (the branch connected to it)");
         }
         if (!spectrum.rightmostCertified()) {
-            warnings.add("the returned eigenvalues are the ones nearest the shift; an eigenvalue with a large imaginary "
-                    + "part further right cannot be ruled out by the certificate (raise --modes to widen the search)");
+            warnings.add(d.massIsDiagonal()
+                    ? "the returned eigenvalues are the ones nearest the shift; an eigenvalue with a large imaginary "
+                    + "part further right cannot be ruled out by the certificate (raise --modes to widen the search)"
+                    : "with a consistent mass matrix (triangle meshes) the spectrum bounds that place the shift are estimates, "
+                    + "so the returned set is not certified to hold the rightmost eigenvalues; a grid study or --modes "
+                    + "larger adds confidence");
         }
         double[][] nodal = d.nodalValues(base.u());
         Map<String, Double> max = new LinkedHashMap<>();

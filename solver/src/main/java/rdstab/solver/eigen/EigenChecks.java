@@ -141,7 +141,8 @@ public final class EigenChecks {
 
     /**
      * Error bound of an eigenvalue from its residual in the energy norm:
-     * η = ‖M^{-1/2}(Jx − λMx)‖₂ / ‖M^{1/2}x‖₂ with M replaced by its row sums (exact for diagonal M).
+     * η = ‖W^{-1/2}(Jx − λMx)‖₂ / ‖M^{1/2}x‖₂ with W the row sums of M (W = M for a diagonal M; for a
+     * consistent mass matrix W^{-1} stands in for M^{-1}, whose norm it bounds within a small constant).
      * For a self-adjoint pencil some eigenvalue lies within η of λ (Krylov–Bogolyubov / Weinstein bound);
      * for a non-normal operator η is a first-order estimate only.
      */
@@ -153,24 +154,31 @@ public final class EigenChecks {
                 w[m.nz_rows[p]] += m.nz_values[p];
             }
         }
-        double[] jr = new double[n];
-        double[] ji = new double[n];
-        for (int c = 0; c < n; c++) {
-            for (int p = j.col_idx[c]; p < j.col_idx[c + 1]; p++) {
-                jr[j.nz_rows[p]] += j.nz_values[p] * e.vectorRe()[c];
-                ji[j.nz_rows[p]] += j.nz_values[p] * e.vectorIm()[c];
-            }
-        }
+        double[] xr = e.vectorRe();
+        double[] xi = e.vectorIm();
+        double[] jr = multiply(j, xr);
+        double[] ji = multiply(j, xi);
+        double[] mr = multiply(m, xr);
+        double[] mi = multiply(m, xi);
         double num = 0;
         double den = 0;
         for (int i = 0; i < n; i++) {
-            double xr = e.vectorRe()[i];
-            double xi = e.vectorIm()[i];
-            double rr = jr[i] - w[i] * (e.re() * xr - e.im() * xi);
-            double ri = ji[i] - w[i] * (e.re() * xi + e.im() * xr);
+            double rr = jr[i] - (e.re() * mr[i] - e.im() * mi[i]);
+            double ri = ji[i] - (e.re() * mi[i] + e.im() * mr[i]);
             num += (rr * rr + ri * ri) / w[i];
-            den += w[i] * (xr * xr + xi * xi);
+            den += xr[i] * mr[i] + xi[i] * mi[i];
         }
         return Math.sqrt(num / den);
+    }
+
+    private static double[] multiply(DMatrixSparseCSC a, double[] x) {
+        double[] y = new double[a.numRows];
+        for (int c = 0; c < a.numCols; c++) {
+            double xc = x[c];
+            for (int p = a.col_idx[c]; p < a.col_idx[c + 1]; p++) {
+                y[a.nz_rows[p]] += a.nz_values[p] * xc;
+            }
+        }
+        return y;
     }
 }
