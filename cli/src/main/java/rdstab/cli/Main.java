@@ -6,6 +6,9 @@ import java.io.UncheckedIOException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import rdstab.cli.command.CheckCommand;
+import rdstab.cli.command.CriticalCommand;
+import rdstab.cli.command.MergeCommand;
+import rdstab.cli.command.SweepCommand;
 import rdstab.solver.error.ConvergenceException;
 import rdstab.solver.error.InputException;
 
@@ -21,7 +24,8 @@ import rdstab.solver.error.InputException;
             "",
             "Start with:  rdstab check cases/slab-self-heating.yaml",
             "Case files are YAML; their keys are described in cases/README.md."},
-        subcommands = {CheckCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {CheckCommand.class, SweepCommand.class, CriticalCommand.class, MergeCommand.class,
+            CommandLine.HelpCommand.class},
         footerHeading = "%nExit status:%n",
         footer = {"  0  the run completed (whatever the verdict)", "  1  internal error (a bug: please report it)", "  2  bad input (usage, case file, formula, parameter)",
             "  3  numerical failure (no steady state found, eigen-solver did not converge)", "  4  input/output failure"})
