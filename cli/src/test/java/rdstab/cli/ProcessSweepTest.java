@@ -54,6 +54,19 @@ class ProcessSweepTest {
         return a;
     }
 
+    /** Complete data lines of a CSV sweep file (0 when it does not exist yet). */
+    static long dataLines(Path csv) throws IOException {
+        if (!Files.exists(csv)) {
+            return 0;
+        }
+        byte[] b = Files.readAllBytes(csv);
+        long n = 0;
+        for (byte x : b) {
+            n += x == '\n' ? 1 : 0;
+        }
+        return Math.max(0, n - 2);
+    }
+
     @Test
     void fourShardProcessesMergedEqualOneProcess() throws Exception {
         Path c = slab(60);
@@ -87,8 +100,18 @@ class ProcessSweepTest {
         StringBuilder log = new StringBuilder();
         for (int k = 0; k < kills; k++) {
             Process p = launch("run" + k, sweepArgs(c, "run.csv", "--threads", "2", "--resume"));
-            long delay = 600 + rnd.nextInt(1400);
-            if (p.waitFor(delay, TimeUnit.MILLISECONDS)) {
+            // a random instant while points are being written: once the CSV holds a random number of rows
+            // beyond those already there, plus a random 0-150 ms (seeded, so the test is repeatable)
+            // (within the first third of the remaining rows: with two threads rows arrive in bursts)
+            int target = rowsBefore + 1 + rnd.nextInt(Math.max(1, (36 - rowsBefore) / 3));
+            long extra = rnd.nextInt(150);
+            long delay = System.nanoTime();
+            while (p.isAlive() && dataLines(tmp.resolve("run.csv")) < target) {
+                Thread.sleep(5);
+            }
+            Thread.sleep(extra);
+            delay = (System.nanoTime() - delay) / 1_000_000;
+            if (!p.isAlive()) {
                 break; // finished before the kill: nothing left to interrupt
             }
             p.destroyForcibly(); // SIGKILL on Linux
