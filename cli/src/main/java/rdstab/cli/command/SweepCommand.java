@@ -135,7 +135,7 @@ public final class SweepCommand implements Callable<Integer> {
              Progress bar = Progress.start(points.length, o.written(), quiet)) {
             AtomicInteger computed = new AtomicInteger();
             int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
-            SweepRunner.run(c, grid, grid.chainsOf(sh), o::finished, n, outcome -> {
+            SweepRunner.run(c, grid, grid.chainsOf(sh), o::earlier, n, outcome -> {
                 String csvRow = SweepFiles.csvRow(outcome, c.fieldNames());
                 String jsonRow = SweepFiles.jsonRow(outcome, grid.names());
                 o.accept(outcome.point(), csvRow, jsonRow);

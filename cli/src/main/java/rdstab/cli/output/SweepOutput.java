@@ -29,6 +29,9 @@ import rdstab.cli.report.ResultJson;
  * and in order in both files; the files are truncated to it. Journal entries for later points are
  * taken back; the journal is then rewritten (temporary file, fsync, atomic rename). The journal is
  * deleted when the run completes.
+ *
+ * <p><b>One writer.</b> An OS lock on {@code FILE.pending.lock} (an empty file that stays) is held while
+ * a run writes; a second run on the same output is refused instead of interleaving rows.
  */
 public final class SweepOutput implements AutoCloseable {
 
@@ -38,13 +41,18 @@ public final class SweepOutput implements AutoCloseable {
     private final FileChannel csv;
     private final FileChannel json;
     private FileChannel journal;
+    /** Held (with an OS file lock on FILE.pending.lock) while this run writes; keeps a second run out. */
+    private FileChannel lock;
     private final Map<Integer, Integer> position = new HashMap<>();
     private final TreeMap<Integer, String[]> waiting = new TreeMap<>();
     private final int[] points;
     private int next;
     private final int resumed;
+    /** Status of the points finished before this run started (resumed rows and journal entries). */
+    private final Map<Integer, rdstab.solver.sweep.PointStatus> earlier = new HashMap<>();
 
-    private SweepOutput(Path[] paths, int[] points, int done, Map<Integer, String[]> pending) throws IOException {
+    private SweepOutput(Path[] paths, int[] points, int done, Map<Integer, String[]> pending, List<SweepFiles.Line> kept)
+            throws IOException {
         this.csvPath = paths[0];
         this.jsonPath = paths[1];
         this.journalPath = journalOf(paths[1]);
@@ -55,6 +63,10 @@ public final class SweepOutput implements AutoCloseable {
         this.next = done;
         this.resumed = done;
         pending.forEach((p, rows) -> waiting.put(position.get(p), rows));
+        for (int i = 0; i < done; i++) {
+            earlier.put(kept.get(i).point(), status(kept.get(i).text()));
+        }
+        pending.forEach((p, rows) -> earlier.put(p, status(rows[1])));
         csv = FileChannel.open(csvPath, StandardOpenOption.WRITE);
         json = FileChannel.open(jsonPath, StandardOpenOption.WRITE);
         csv.position(csv.size());
@@ -84,6 +96,25 @@ public final class SweepOutput implements AutoCloseable {
                                    boolean force) throws IOException {
         Path dir = paths[0].toAbsolutePath().getParent();
         Files.createDirectories(dir);
+        FileChannel lock = FileChannel.open(journalOf(paths[1]).resolveSibling(journalOf(paths[1]).getFileName() + ".lock"),
+                StandardOpenOption.CREATE, StandardOpenOption.WRITE);
+        try {
+            if (lock.tryLock() == null) {
+                throw new java.nio.file.FileSystemException(paths[0] + ": another rdstab sweep is writing this output now; "
+                        + "wait for it, or give this run another --out");
+            }
+            SweepOutput o = openLocked(paths, csvHead, jsonHead, columns, points, resume, force);
+            o.lock = lock;
+            return o;
+        } catch (IOException | RuntimeException e) {
+            lock.close();
+            throw e;
+        }
+    }
+
+    private static SweepOutput openLocked(Path[] paths, String csvHead, String jsonHead, int columns, int[] points,
+                                          boolean resume, boolean force) throws IOException {
+        Path dir = paths[0].toAbsolutePath().getParent();
         boolean exists = Files.exists(paths[0]) || Files.exists(paths[1]);
         if (exists && !resume && !force) {
             throw new java.nio.file.FileAlreadyExistsException(paths[0] + " or " + paths[1]
@@ -101,14 +132,14 @@ public final class SweepOutput implements AutoCloseable {
                 truncate(paths[0], done == 0 ? c.headerEnd() : c.lines().get(done - 1).end());
                 truncate(paths[1], done == 0 ? j.headerEnd() : j.lines().get(done - 1).end());
                 pending = readJournal(journalOf(paths[1]), points, done, columns);
-                return new SweepOutput(paths, points, done, pending);
+                return new SweepOutput(paths, points, done, pending, j.lines());
             }
         }
         fresh(paths[0], csvHead);
         fresh(paths[1], jsonHead);
         Files.deleteIfExists(journalOf(paths[1]));
         syncDirectory(dir);
-        return new SweepOutput(paths, points, 0, pending);
+        return new SweepOutput(paths, points, 0, pending, List.of());
     }
 
     private static void sameSweep(Path file, String found, String expected) {
@@ -196,10 +227,17 @@ public final class SweepOutput implements AutoCloseable {
         return resumed;
     }
 
-    /** True when point p is finished: written, or waiting in the journal. */
-    public synchronized boolean finished(int p) {
-        Integer at = position.get(p);
-        return at != null && (at < next || waiting.containsKey(at));
+    /** The status of point p when it was finished before this run started (resumed or journal), else null. */
+    public rdstab.solver.sweep.PointStatus earlier(int p) {
+        return earlier.get(p);
+    }
+
+    private static rdstab.solver.sweep.PointStatus status(String jsonRow) {
+        try {
+            return rdstab.solver.sweep.PointStatus.of(SweepFiles.MAPPER.readTree(jsonRow).get("status").asText());
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
     }
 
     /** Rows written so far (including resumed ones). */
@@ -282,6 +320,9 @@ public final class SweepOutput implements AutoCloseable {
         } finally {
             if (complete()) {
                 Files.deleteIfExists(journalPath);
+            }
+            if (lock != null) {
+                lock.close();
             }
         }
     }

@@ -6,7 +6,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
-import java.util.function.IntPredicate;
+import java.util.function.IntFunction;
 import rdstab.solver.drive.CheckResult;
 import rdstab.solver.drive.StabilityCheck;
 import rdstab.solver.error.ConvergenceException;
@@ -24,9 +24,11 @@ import rdstab.solver.setup.ProblemBuilder;
  * are fixed by the {@link SweepGrid} and each is computed sequentially, the numbers do not depend on
  * the number of threads.
  *
- * <p>Points already finished (a resumed run) are not reported again; their base state is recomputed
- * by Newton alone (no eigen-solve) so the next point starts from the same guess as in an
- * uninterrupted run.
+ * <p>Points already finished (a resumed run) are not reported again. Where a later point of the chain
+ * still has to be computed, the base state of a finished point with status OK or NOT_CONVERGED is
+ * recomputed by Newton alone (no eigen-solve), so the next point starts from the same guess as in an
+ * uninterrupted run; a finished point that had no steady state (or was a bad point) left the guess
+ * unchanged then and is skipped now. Chains with nothing left to compute are not run at all.
  *
  * <p>The listener is called from worker threads, concurrently and in completion order; it must be
  * thread-safe. If it throws, the sweep stops and the exception is rethrown by {@link #run}.
@@ -49,12 +51,13 @@ public final class SweepRunner {
      * @param base    the case (its values of the varied parameters are replaced point by point)
      * @param grid    the sweep
      * @param chains  chain numbers to compute
-     * @param done    points already finished: not reported, only their base state is recomputed
+     * @param finished status of each point already finished (null when it is still to be computed)
      * @param threads worker threads (≥ 1)
      * @param l       receives each outcome
      * @throws Exception the first exception thrown by the listener (the sweep stops)
      */
-    public static void run(Case base, SweepGrid grid, List<Integer> chains, IntPredicate done, int threads, Listener l)
+    public static void run(Case base, SweepGrid grid, List<Integer> chains, IntFunction<PointStatus> finished, int threads,
+                           Listener l)
             throws Exception {
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be >= 1, got " + threads);
@@ -69,7 +72,7 @@ public final class SweepRunner {
             for (int k : chains) {
                 int[] pts = grid.chain(k);
                 futures.add(pool.submit(() -> {
-                    runChain(base, grid, pts, done, l);
+                    runChain(base, grid, pts, finished, l);
                     return null;
                 }));
             }
@@ -89,9 +92,16 @@ public final class SweepRunner {
     }
 
     /** One chain, sequentially (public for tests and for single-thread drivers). */
-    public static void runChain(Case base, SweepGrid grid, int[] pts, IntPredicate done, Listener l) throws Exception {
+    public static void runChain(Case base, SweepGrid grid, int[] pts, IntFunction<PointStatus> finished, Listener l)
+            throws Exception {
+        int last = pts.length - 1;
+        while (last >= 0 && finished.apply(pts[last]) != null) {
+            last--;
+        }
         double[] warm = null;
-        for (int p : pts) {
+        for (int i = 0; i <= last; i++) {
+            int p = pts[i];
+            PointStatus earlier = finished.apply(p);
             if (Thread.currentThread().isInterrupted()) {
                 throw new InterruptedException("sweep stopped");
             }
@@ -105,14 +115,16 @@ public final class SweepRunner {
                 }
                 prob = ProblemBuilder.build(c);
             } catch (IllegalArgumentException e) {
-                if (!done.test(p)) {
+                if (earlier == null) {
                     l.pointFinished(new PointOutcome(p, v, null, PointStatus.BAD_POINT, null, -1, Double.NaN, e.getMessage()));
                 }
                 continue;
             }
             double[] guess = warm != null && warm.length == prob.full().unknowns() ? warm : prob.initial();
-            if (done.test(p)) {
-                warm = baseOnly(prob, guess, warm);
+            if (earlier != null) {
+                if (earlier == PointStatus.OK || earlier == PointStatus.NOT_CONVERGED) {
+                    warm = baseOnly(prob, guess, warm);
+                }
                 continue;
             }
             PointOutcome o = compute(p, v, c, prob, guess);

@@ -24,7 +24,7 @@ class NeutralCurveTest {
         double[] growth = new double[n];
         double[] freq = new double[n];
         Arrays.fill(growth, Double.NaN);
-        SweepRunner.run(c, grid, grid.chainsOf(Shard.ALL), p -> false, 2, o -> {
+        SweepRunner.run(c, grid, grid.chainsOf(Shard.ALL), p -> null, 2, o -> {
             status[o.point()] = o.status();
             if (o.result() != null) {
                 growth[o.point()] = o.result().assessment().growthRate();
