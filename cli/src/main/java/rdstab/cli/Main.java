@@ -9,6 +9,9 @@ import rdstab.cli.command.CheckCommand;
 import rdstab.cli.command.TraceCommand;
 import rdstab.cli.command.ConvergeCommand;
 import rdstab.cli.command.SimulateCommand;
+import rdstab.cli.command.CriticalCommand;
+import rdstab.cli.command.MergeCommand;
+import rdstab.cli.command.SweepCommand;
 import rdstab.solver.error.ConvergenceException;
 import rdstab.solver.error.InputException;
 
@@ -24,7 +27,8 @@ import rdstab.solver.error.InputException;
             "",
             "Start with:  rdstab check cases/slab-self-heating.yaml",
             "Case files are YAML; their keys are described in cases/README.md."},
-        subcommands = {CheckCommand.class, TraceCommand.class, ConvergeCommand.class, SimulateCommand.class,
+        subcommands = {CheckCommand.class, SweepCommand.class, CriticalCommand.class, TraceCommand.class,
+            ConvergeCommand.class, SimulateCommand.class, MergeCommand.class,
             CommandLine.HelpCommand.class},
         footerHeading = "%nExit status:%n",
         footer = {"  0  the run completed (whatever the verdict)", "  1  internal error (a bug: please report it)", "  2  bad input (usage, case file, formula, parameter)",
