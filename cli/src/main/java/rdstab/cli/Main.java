@@ -6,6 +6,8 @@ import java.io.UncheckedIOException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import rdstab.cli.command.CheckCommand;
+import rdstab.cli.command.ExportCommand;
+import rdstab.cli.command.SpectrumCommand;
 import rdstab.solver.error.ConvergenceException;
 import rdstab.solver.error.InputException;
 
@@ -21,7 +23,7 @@ import rdstab.solver.error.InputException;
             "",
             "Start with:  rdstab check cases/slab-self-heating.yaml",
             "Case files are YAML; their keys are described in cases/README.md."},
-        subcommands = {CheckCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {CheckCommand.class, SpectrumCommand.class, ExportCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit status:%n",
         footer = {"  0  the run completed (whatever the verdict)", "  1  internal error (a bug: please report it)", "  2  bad input (usage, case file, formula, parameter)",
             "  3  numerical failure (no steady state found, eigen-solver did not converge)", "  4  input/output failure"})
