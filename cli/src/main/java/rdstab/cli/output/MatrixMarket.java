@@ -43,6 +43,11 @@ public final class MatrixMarket {
             }
             Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
             try {
+                try {
+                    Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+                } catch (UnsupportedOperationException e) {
+                    // not a POSIX file system: keep the default permissions
+                }
                 try (BufferedWriter w = Files.newBufferedWriter(tmp, StandardCharsets.US_ASCII)) {
                     writeTo(w, a, symmetric, comment);
                 }
@@ -129,17 +134,17 @@ public final class MatrixMarket {
                     e--;
                     continue;
                 }
-                String[] t = line.trim().split("\\s+");
-                if (t.length < 3) {
+                int[] cut = fields(line);
+                if (cut == null) {
                     throw new InputException(name, "line " + lineNo, "'row column value', found '" + line.trim() + "'");
                 }
                 int i;
                 int j;
                 double v;
                 try {
-                    i = Integer.parseInt(t[0]) - 1;
-                    j = Integer.parseInt(t[1]) - 1;
-                    v = Double.parseDouble(t[2]);
+                    i = Integer.parseInt(line, cut[0], cut[1], 10) - 1;
+                    j = Integer.parseInt(line, cut[2], cut[3], 10) - 1;
+                    v = Double.parseDouble(line.substring(cut[4], cut[5]));
                 } catch (NumberFormatException ex) {
                     throw new InputException(name, "line " + lineNo, "'row column value' as numbers, found '" + line.trim() + "'");
                 }
@@ -162,6 +167,27 @@ public final class MatrixMarket {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + name + ": " + e.getMessage(), e);
         }
+    }
+
+    /** Start and end of the first three blank-separated fields of a line, or null when there are fewer. */
+    private static int[] fields(String line) {
+        int[] cut = new int[6];
+        int pos = 0;
+        int len = line.length();
+        for (int f = 0; f < 3; f++) {
+            while (pos < len && Character.isWhitespace(line.charAt(pos))) {
+                pos++;
+            }
+            if (pos == len) {
+                return null;
+            }
+            cut[2 * f] = pos;
+            while (pos < len && !Character.isWhitespace(line.charAt(pos))) {
+                pos++;
+            }
+            cut[2 * f + 1] = pos;
+        }
+        return cut;
     }
 
     private static long[] numbers(String line, int count, String file, int lineNo, String expected) {
