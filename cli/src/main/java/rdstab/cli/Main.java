@@ -12,6 +12,8 @@ import rdstab.cli.command.SimulateCommand;
 import rdstab.cli.command.CriticalCommand;
 import rdstab.cli.command.MergeCommand;
 import rdstab.cli.command.SweepCommand;
+import rdstab.cli.command.ExportCommand;
+import rdstab.cli.command.SpectrumCommand;
 import rdstab.solver.error.ConvergenceException;
 import rdstab.solver.error.InputException;
 
@@ -28,7 +30,7 @@ import rdstab.solver.error.InputException;
             "Start with:  rdstab check cases/slab-self-heating.yaml",
             "Case files are YAML; their keys are described in cases/README.md."},
         subcommands = {CheckCommand.class, SweepCommand.class, CriticalCommand.class, TraceCommand.class,
-            ConvergeCommand.class, SimulateCommand.class, MergeCommand.class,
+            ConvergeCommand.class, SimulateCommand.class, MergeCommand.class, ExportCommand.class, SpectrumCommand.class,
             CommandLine.HelpCommand.class},
         footerHeading = "%nExit status:%n",
         footer = {"  0  the run completed (whatever the verdict)", "  1  internal error (a bug: please report it)", "  2  bad input (usage, case file, formula, parameter)",

@@ -18,13 +18,25 @@ import java.util.List;
  * @param method                 "dense", "arnoldi" or "lanczos"
  * @param factorizationSeconds   wall time spent factorizing J − σM
  * @param iterationSeconds       wall time spent in the Krylov iteration and post-processing
+ * @param orderingSeconds        wall time of the fill-reducing ordering and symbolic analysis (0 when a cached
+ *                               analysis of the same pattern was reused; NaN for the dense path)
+ * @param factorNonZeros         stored non-zeros of the sparse factors (L, or L + U), −1 for the dense path
  */
 public record Spectrum(List<EigenPair> pairs, double shift, int requested, int computed, long operatorApplications,
                        int restarts, boolean rightmostCertified, double imaginaryBound, String method,
-                       double factorizationSeconds, double iterationSeconds) {
+                       double factorizationSeconds, double iterationSeconds, double orderingSeconds,
+                       long factorNonZeros) {
 
     public Spectrum {
         pairs = List.copyOf(pairs);
+    }
+
+    /** Without the ordering time and factor size (the dense path). */
+    public Spectrum(List<EigenPair> pairs, double shift, int requested, int computed, long operatorApplications,
+                    int restarts, boolean rightmostCertified, double imaginaryBound, String method,
+                    double factorizationSeconds, double iterationSeconds) {
+        this(pairs, shift, requested, computed, operatorApplications, restarts, rightmostCertified, imaginaryBound,
+                method, factorizationSeconds, iterationSeconds, Double.NaN, -1);
     }
 
     /** Largest Re λ found (the growth rate of the most unstable mode). */

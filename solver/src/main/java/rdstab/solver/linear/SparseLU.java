@@ -36,9 +36,13 @@ public final class SparseLU extends PermutedFactorization {
      */
     public static SparseLU factor(DMatrixSparseCSC a, Ordering ordering) {
         requireSquare(a);
-        int n = a.numCols;
         int[] p = ordering.permutation(a);
-        DMatrixSparseCSC pa = SparseOps.permuteSymmetric(a, p);
+        return factorPermuted(a, p, SparseOps.permuteSymmetric(a, p));
+    }
+
+    /** Numeric LU of pa = A(p, p), already permuted (the symbolic part of EJML's LU depends on pivots and is redone). */
+    static SparseLU factorPermuted(DMatrixSparseCSC a, int[] p, DMatrixSparseCSC pa) {
+        int n = a.numCols;
         LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> solver = LinearSolverFactory_DSCC.lu(FillReducing.NONE);
         boolean ok = solver.setA(pa);
         LuUpLooking_DSCC lu = solver.getDecomposition();

@@ -94,7 +94,7 @@ class SparseFactorizationTest {
     void choleskyMatchesDenseSolve() {
         DMatrixSparseCSC a = grid(15, 0.0, 0.1, 12);
         SparseFactorization f = Factorizations.factor(a, true, Factorizations.defaultOrdering());
-        assertTrue(f instanceof SparseCholesky);
+        assertTrue(f instanceof SupernodalCholesky);
         assertSolves(f, a);
     }
 
