@@ -68,8 +68,8 @@ public final class CriticalCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Axis range = Axis.parseRange(vary);
         Case c = caseOptions.load();
+        Axis range = Axis.parseRange(vary, c);
         c.parameter(range.name());
         double tol = tolerance != null ? tolerance : CriticalFinder.defaultTolerance(range);
         CriticalPoint r = CriticalFinder.find(c, range, tol, scan);
@@ -107,6 +107,14 @@ public final class CriticalCommand implements Callable<Integer> {
         }
         crit.put("scan", scan);
         crit.put("checks", r.checks());
+        Case c = r.atCritical().problem().theCase();
+        javax.measure.Unit<?> unit = c.physical().units().get(r.parameter());
+        if (unit != null) {
+            Map<String, Object> disp = new LinkedHashMap<>();
+            disp.put("value", rdstab.solver.units.QuantityParser.fromSi(r.value(), unit));
+            disp.put("unit", c.unitText(r.parameter()));
+            crit.put("in_case_units", disp);
+        }
         m.put("critical", crit);
         return m;
     }
@@ -116,26 +124,26 @@ public final class CriticalCommand implements Callable<Integer> {
         CheckResult at = r.atCritical();
         w.println(c.title());
         w.printf("case %s | %d cells, %d unknowns | searching %s from %s to %s%n%n", c.source(), c.mesh().cells(),
-                at.problem().full().unknowns(), p, TextReport.sig(range.from(), 6),
-                TextReport.sig(range.to(), 6));
+                at.problem().full().unknowns(), p, v(c, p, range.from(), 6),
+                v(c, p, range.to(), 6));
         switch (r.kind()) {
-            case FOLD -> w.printf(Locale.ROOT, "CRITICAL VALUE: %s = %s ± %.1e — fold: no steady state beyond it%n", p,
-                    TextReport.sig(r.value(), 9), r.tolerance());
-            case REAL_CROSSING -> w.printf(Locale.ROOT, "CRITICAL VALUE: %s = %s ± %.1e — real crossing: a real eigenvalue "
-                    + "crosses zero, the steady state continues%n", p, TextReport.sig(r.value(), 9), r.tolerance());
-            case OSCILLATORY_CROSSING -> w.printf(Locale.ROOT, "CRITICAL VALUE: %s = %s ± %.1e — oscillatory crossing: a "
+            case FOLD -> w.printf(Locale.ROOT, "CRITICAL VALUE: %s = %s ± %s — fold: no steady state beyond it%n", p,
+                    v(c, p, r.value(), 9), tol(c, p, r.value(), r.tolerance()));
+            case REAL_CROSSING -> w.printf(Locale.ROOT, "CRITICAL VALUE: %s = %s ± %s — real crossing: a real eigenvalue "
+                    + "crosses zero, the steady state continues%n", p, v(c, p, r.value(), 9), tol(c, p, r.value(), r.tolerance()));
+            case OSCILLATORY_CROSSING -> w.printf(Locale.ROOT, "CRITICAL VALUE: %s = %s ± %s — oscillatory crossing: a "
                     + "complex pair crosses, onset of oscillations with frequency %s (period %s)%n", p,
-                    TextReport.sig(r.value(), 9), r.tolerance(), TextReport.sig(r.frequency(), 6),
+                    v(c, p, r.value(), 9), tol(c, p, r.value(), r.tolerance()), TextReport.sig(r.frequency(), 6),
                     TextReport.sig(2 * Math.PI / r.frequency(), 6));
             default -> w.printf("NO CRITICAL VALUE between %s and %s: the growth rate keeps its sign and the steady state "
-                    + "exists at every scanned value%n", TextReport.sig(range.from(), 6), TextReport.sig(range.to(), 6));
+                    + "exists at every scanned value%n", v(c, p, range.from(), 6), v(c, p, range.to(), 6));
         }
         if (r.kind() != CriticalPoint.Kind.NONE) {
-            w.printf("  bracket          %s .. %s%n", TextReport.sig(r.low(), 10), TextReport.sig(r.high(), 10));
+            w.printf("  bracket          %s .. %s%n", v(c, p, r.low(), 10), v(c, p, r.high(), 10));
         }
         EigenPair lead = at.modes().get(0);
         w.printf("  at %s = %s: growth rate %s (residual %.1e), max %s, Newton %d steps, residual %.2e%n", p,
-                TextReport.sig(at.problem().theCase().parameter(p), 9), TextReport.sig(lead.re(), 6), lead.residual(),
+                v(c, p, at.problem().theCase().parameter(p), 9), TextReport.sig(lead.re(), 6), lead.residual(),
                 maxes(at), at.base().iterations(), at.base().residual());
         if (r.kind() == CriticalPoint.Kind.FOLD) {
             w.println("  (at a fold the growth rate tends to 0: exchange of stability; the value shown is at the last "
@@ -145,7 +153,7 @@ public final class CriticalCommand implements Callable<Integer> {
         w.println("Coarse scan (each steady state continued from the previous one)");
         w.printf("  %14s  %16s  %s%n", p, "growth rate", "steady state");
         for (CriticalPoint.ScanPoint s : r.scan()) {
-            w.printf("  %14s  %16s  %s%n", TextReport.sig(s.value(), 8), s.exists() ? TextReport.sig(s.growthRate(), 8) : "-",
+            w.printf("  %14s  %16s  %s%n", v(c, p, s.value(), 8), s.exists() ? TextReport.sig(s.growthRate(), 8) : "-",
                     s.exists() ? "yes" : "none found");
         }
         w.println();
@@ -161,6 +169,24 @@ public final class CriticalCommand implements Callable<Integer> {
         for (String s : SafetyCautions.STANDARD) {
             w.println("  - " + s);
         }
+    }
+
+    /** A value of the parameter in the unit the case gave it. */
+    private static String v(Case c, String p, double si, int digits) {
+        String u = c.unitText(p);
+        if (u.isEmpty()) {
+            return TextReport.sig(si, digits);
+        }
+        javax.measure.Unit<?> unit = c.physical().units().get(p);
+        return TextReport.sig(rdstab.solver.units.QuantityParser.fromSi(si, unit), digits) + " " + u;
+    }
+
+    /** A tolerance (a difference) in the unit of the parameter. */
+    private static String tol(Case c, String p, double si, double t) {
+        javax.measure.Unit<?> unit = c.physical().units().get(p);
+        double d = unit == null ? t : Math.abs(rdstab.solver.units.QuantityParser.fromSi(si + t, unit)
+                - rdstab.solver.units.QuantityParser.fromSi(si, unit));
+        return String.format(Locale.ROOT, "%.1e", d) + (unit == null ? "" : " " + c.unitText(p));
     }
 
     private static String maxes(CheckResult at) {

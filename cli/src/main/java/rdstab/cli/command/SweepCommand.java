@@ -108,9 +108,10 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        Case c = caseOptions.load();
         List<Axis> axes = new ArrayList<>();
         for (String v : vary) {
-            axes.add(Axis.parse(v));
+            axes.add(Axis.parse(v, c));
         }
         SweepGrid grid = new SweepGrid(axes, chainLength);
         Shard sh = shard != null ? Shard.parse(shard) : SlurmShard.fromEnvironment(System.getenv());
@@ -120,7 +121,6 @@ public final class SweepCommand implements Callable<Integer> {
         if (neutralCurve != null && axes.size() != 2) {
             throw new InputException("command line", "--neutral-curve", "a neutral curve needs two --vary options");
         }
-        Case c = caseOptions.load();
         for (Axis a : axes) {
             c.parameter(a.name());
         }

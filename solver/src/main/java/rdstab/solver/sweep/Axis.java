@@ -2,6 +2,7 @@ package rdstab.solver.sweep;
 
 import java.util.Locale;
 import rdstab.solver.error.InputException;
+import rdstab.solver.model.Case;
 
 /**
  * One varied parameter of a sweep: COUNT values from FROM to TO, evenly spaced, or evenly spaced in
@@ -47,6 +48,15 @@ public record Axis(String name, double from, double to, int count, boolean log) 
      * @throws InputException one plain line naming the option and what was expected
      */
     public static Axis parse(String spec) {
+        return parse(spec, null);
+    }
+
+    /**
+     * Parses {@code NAME=FROM:TO:COUNT[:log]} for a case: FROM and TO may carry units ("20degC", "0.3 m") and a
+     * plain number is taken in the unit the case gave the parameter (see {@link Case#parseValue}); the axis holds
+     * SI values. With a null case the numbers are taken as they are.
+     */
+    public static Axis parse(String spec, Case c) {
         int eq = spec.indexOf('=');
         if (eq <= 0) {
             throw new InputException("command line", "--vary " + spec, "expected NAME=FROM:TO:COUNT[:log], e.g. delta=0.5:0.9:41");
@@ -69,7 +79,7 @@ public record Axis(String name, double from, double to, int count, boolean log) 
         } catch (NumberFormatException e) {
             throw new InputException("command line", "--vary " + spec, "COUNT must be a whole number, found '" + parts[2] + "'");
         }
-        return new Axis(name, number(parts[0], "FROM", spec), number(parts[1], "TO", spec), count, log);
+        return new Axis(name, number(parts[0], "FROM", spec, name, c), number(parts[1], "TO", spec, name, c), count, log);
     }
 
     /**
@@ -78,20 +88,33 @@ public record Axis(String name, double from, double to, int count, boolean log) 
      * @throws InputException one plain line naming the option and what was expected
      */
     public static Axis parseRange(String spec) {
+        return parseRange(spec, null);
+    }
+
+    /** Parses {@code NAME=FROM:TO} for a case, with units as in {@link #parse(String, Case)}. */
+    public static Axis parseRange(String spec, Case c) {
         int eq = spec.indexOf('=');
         String[] parts = eq <= 0 ? new String[0] : spec.substring(eq + 1).split(":", -1);
         if (parts.length != 2) {
             throw new InputException("command line", "--vary " + spec, "expected NAME=FROM:TO, e.g. delta=0.5:1.2");
         }
-        double a = number(parts[0], "FROM", spec);
-        double b = number(parts[1], "TO", spec);
+        String name = spec.substring(0, eq).trim();
+        double a = number(parts[0], "FROM", spec, name, c);
+        double b = number(parts[1], "TO", spec, name, c);
         if (a == b) {
             throw new InputException("command line", "--vary " + spec, "FROM equals TO: give a range to search");
         }
         return new Axis(spec.substring(0, eq).trim(), a, b, 2, false);
     }
 
-    private static double number(String text, String what, String spec) {
+    private static double number(String text, String what, String spec, String name, Case c) {
+        if (c != null && c.parameters().containsKey(name)) {
+            double v = c.parseValue(name, text.trim());
+            if (!Double.isFinite(v)) {
+                throw new InputException("command line", "--vary " + spec, what + " must be a finite number, found '" + text + "'");
+            }
+            return v;
+        }
         try {
             double v = Double.parseDouble(text.trim());
             if (!Double.isFinite(v)) {
