@@ -34,7 +34,8 @@ import rdstab.solver.timestep.SimulationResult;
             "  rdstab simulate cases/rod-upper-branch.yaml",
             "  rdstab simulate cases/rod-upper-branch.yaml --amplitudes 1e-4,1e-2,0.1,-0.1,0.5 --out runs.csv",
             "  rdstab simulate cases/slab-self-heating.yaml --mode 2 --amplitude 0.01 --time 5 --json",
-            "  rdstab simulate cases/rod-upper-branch.yaml --amplitudes 1e-4,0.01,-0.1 --plots pictures/"},
+            "  rdstab simulate cases/rod-upper-branch.yaml --amplitudes 1e-4,0.01,-0.1 \\",
+            "      --plots pics"},
         footer = {"", "Exit status: 0 completed (any outcome), 2 bad input, 3 numerical failure, 4 file error."})
 public final class SimulateCommand implements Callable<Integer> {
 
@@ -53,7 +54,7 @@ public final class SimulateCommand implements Callable<Integer> {
 
     @Option(names = "--amplitudes", paramLabel = "A1,A2,...", split = ",",
             description = "Several amplitudes, one run each; reports the smallest at which the measured rate departs from "
-                    + "the linear one by more than 10%.")
+                    + "the linear one by more than 10%%.")
     List<Double> amplitudes;
 
     @Option(names = "--time", paramLabel = "T",
