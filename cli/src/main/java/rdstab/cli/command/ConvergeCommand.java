@@ -11,6 +11,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 import rdstab.cli.output.AtomicFiles;
+import rdstab.cli.plot.ConvergePlots;
 import rdstab.cli.report.GridReport;
 import rdstab.cli.report.ResultJson;
 import rdstab.solver.model.Case;
@@ -30,7 +31,8 @@ import rdstab.solver.verify.GridStudyResult;
             "",
             "Examples:",
             "  rdstab converge cases/slab-self-heating.yaml --cells 50",
-            "  rdstab converge cases/slab-self-heating.yaml --cells 50 --levels 4 --out grid.csv --json"},
+            "  rdstab converge cases/slab-self-heating.yaml --cells 50 --levels 4 --out grid.csv --json",
+            "  rdstab converge cases/slab-self-heating.yaml --cells 50 --plots pictures/"},
         footer = {"", "Exit status: 0 completed, 2 bad input, 3 numerical failure on some level, 4 file error."})
 public final class ConvergeCommand implements Callable<Integer> {
 
@@ -53,7 +55,13 @@ public final class ConvergeCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "FILE.csv", description = "Write one CSV row per level to this file.")
     Path out;
 
-    @Option(names = "--force", description = "Overwrite an existing --out file.")
+    @Option(names = "--plots", paramLabel = "DIR",
+            description = "Draw convergence.png/.svg into DIR: the relative error against the Richardson-extrapolated "
+                    + "value of the growth rate and of each base-state maximum versus the mesh spacing, on log axes, "
+                    + "with the observed orders in the legend.")
+    Path plots;
+
+    @Option(names = "--force", description = "Overwrite existing --out and --plots files.")
     boolean force;
 
     @Option(names = "--debug", description = "Show stack traces on errors.")
@@ -64,6 +72,7 @@ public final class ConvergeCommand implements Callable<Integer> {
         Case c = caseOptions.load();
         int[] cells = GridStudy.refined(c.mesh().cells(), levels, ratio);
         GridStudyResult r = GridStudy.run(c, cells, cells.length - 1, null);
+        ConvergePlots.Written pictures = plots == null ? null : ConvergePlots.write(r, plots, force);
         PrintWriter w = spec.commandLine().getOut();
         if (json) {
             Map<String, Object> m = new LinkedHashMap<>();
@@ -82,6 +91,13 @@ public final class ConvergeCommand implements Callable<Integer> {
             if (!json) {
                 w.println("Levels written to " + out);
             }
+        }
+        if (pictures != null && !json) {
+            for (String o : pictures.omitted()) {
+                w.println("Convergence plot: " + o);
+            }
+            w.println(pictures.files().isEmpty() ? "No convergence plot: nothing changes with the grid above round-off"
+                    : "Convergence plot written to " + plots + " (convergence.png, convergence.svg)");
         }
         w.flush();
         return 0;

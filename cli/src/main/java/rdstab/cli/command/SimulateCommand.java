@@ -11,6 +11,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 import rdstab.cli.output.AtomicFiles;
+import rdstab.cli.plot.SimulatePlots;
 import rdstab.cli.report.ResultJson;
 import rdstab.cli.report.SimulationReport;
 import rdstab.solver.drive.CheckResult;
@@ -32,7 +33,9 @@ import rdstab.solver.timestep.SimulationResult;
             "Examples:",
             "  rdstab simulate cases/rod-upper-branch.yaml",
             "  rdstab simulate cases/rod-upper-branch.yaml --amplitudes 1e-4,1e-2,0.1,-0.1,0.5 --out runs.csv",
-            "  rdstab simulate cases/slab-self-heating.yaml --mode 2 --amplitude 0.01 --time 5 --json"},
+            "  rdstab simulate cases/slab-self-heating.yaml --mode 2 --amplitude 0.01 --time 5 --json",
+            "  rdstab simulate cases/rod-upper-branch.yaml --amplitudes 1e-4,0.01,-0.1 \\",
+            "      --plots pics"},
         footer = {"", "Exit status: 0 completed (any outcome), 2 bad input, 3 numerical failure, 4 file error."})
 public final class SimulateCommand implements Callable<Integer> {
 
@@ -51,7 +54,7 @@ public final class SimulateCommand implements Callable<Integer> {
 
     @Option(names = "--amplitudes", paramLabel = "A1,A2,...", split = ",",
             description = "Several amplitudes, one run each; reports the smallest at which the measured rate departs from "
-                    + "the linear one by more than 10%.")
+                    + "the linear one by more than 10%%.")
     List<Double> amplitudes;
 
     @Option(names = "--time", paramLabel = "T",
@@ -71,7 +74,12 @@ public final class SimulateCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "FILE.csv", description = "Write the time histories (one row per time step) to this file.")
     Path out;
 
-    @Option(names = "--force", description = "Overwrite an existing --out file.")
+    @Option(names = "--plots", paramLabel = "DIR",
+            description = "Draw time-history.png/.svg into DIR: the distance from the base state of every run on a log "
+                    + "scale, with the linear prediction e^(Re λ t) dashed beside each.")
+    Path plots;
+
+    @Option(names = "--force", description = "Overwrite existing --out and --plots files.")
     boolean force;
 
     @Option(names = "--debug", description = "Show stack traces on errors.")
@@ -104,6 +112,12 @@ public final class SimulateCommand implements Callable<Integer> {
             AtomicFiles.write(out, SimulationReport.csv(s), force);
             if (!json) {
                 w.println("Time histories written to " + out);
+            }
+        }
+        if (plots != null) {
+            SimulatePlots.write(s, plots, force);
+            if (!json) {
+                w.println("Time-history plot written to " + plots + " (time-history.png, time-history.svg)");
             }
         }
         w.flush();

@@ -10,6 +10,7 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 import rdstab.cli.output.BranchFiles;
+import rdstab.cli.plot.TracePlots;
 import rdstab.cli.report.ResultJson;
 import rdstab.cli.report.TraceReport;
 import rdstab.solver.continuation.BranchTracer;
@@ -31,11 +32,15 @@ import rdstab.solver.model.Case;
             "Examples:",
             "  rdstab trace cases/slab-self-heating.yaml --along delta=0.2:1.5",
             "  rdstab trace cases/slab-s-curve.yaml --along delta=0.05:0.6 --out branch.csv",
-            "  rdstab trace cases/slab-s-curve.yaml --along delta=0.05:0.6 --restart branch.csv.states --row 12"},
+            "  rdstab trace cases/slab-s-curve.yaml --along delta=0.05:0.6 --restart branch.csv.states --row 12",
+            "  rdstab trace cases/slab-s-curve.yaml --along delta=0.3:1.5 --plots pics \\",
+            "      --measure norm"},
         footerHeading = "%nFiles:%n",
         footer = {"  --out FILE writes the branch as CSV (JSON lines when FILE ends in .jsonl) and FILE.states: one JSON",
             "  object per row with the full state and tangent (keys row, step, arclength, parameter_name, parameter,",
             "  label, next_step, unknowns, u, tangent_u, tangent_p), which --restart reads.",
+            "  --plots DIR draws branch.png/.svg (the measure against the parameter, stable solid, unstable dashed,",
+            "  special points named) and branch-growth.png/.svg (the growth rate Re λ₁ along the branch).",
             "Exit status: 0 completed, 2 bad input, 3 numerical failure (e.g. no steady state at FROM), 4 file error."})
 public final class TraceCommand implements Callable<Integer> {
 
@@ -52,6 +57,15 @@ public final class TraceCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "FILE", description = "Write the branch (CSV, or JSON lines for *.jsonl) and FILE.states.")
     Path out;
+
+    @Option(names = "--plots", paramLabel = "DIR",
+            description = "Draw the branch diagram and the growth rate along the branch as PNG and SVG into DIR.")
+    Path plots;
+
+    @Option(names = "--measure", paramLabel = "WHAT", defaultValue = "max",
+            description = "What the branch diagram shows: max (largest value of the first field, the default), "
+                    + "max:FIELD (of that field) or norm (M-norm of the whole state).")
+    String measure;
 
     @Option(names = "--max-steps", paramLabel = "N", defaultValue = "200", description = "Cap on continuation steps (default ${DEFAULT-VALUE}).")
     int maxSteps;
@@ -82,6 +96,12 @@ public final class TraceCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--restart and --row go together");
         }
         Case c = caseOptions.load();
+        TracePlots.Measure m;
+        try {
+            m = TracePlots.Measure.parse(measure, c);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), e.getMessage());
+        }
         TraceResult r;
         if (restart != null) {
             RestartPoint p = BranchFiles.readRow(restart, row, o.name());
@@ -96,6 +116,7 @@ public final class TraceCommand implements Callable<Integer> {
         if (out != null) {
             BranchFiles.write(r, out, force);
         }
+        int pictures = plots == null ? 0 : TracePlots.write(r, m, plots, force).size();
         PrintWriter w = spec.commandLine().getOut();
         if (json) {
             w.println(ResultJson.write(TraceReport.toMap(r, out == null ? null : out.toString())));
@@ -104,6 +125,9 @@ public final class TraceCommand implements Callable<Integer> {
             if (out != null) {
                 w.println();
                 w.println("Files written: " + out + ", " + BranchFiles.statesOf(out));
+            }
+            if (plots != null) {
+                w.println(pictures + " pictures written to " + plots + " (branch, branch-growth; PNG and SVG)");
             }
         }
         w.flush();

@@ -15,20 +15,20 @@ import javax.xml.parsers.DocumentBuilderFactory;
 import org.w3c.dom.Document;
 
 /** Test helpers: decode pictures and check that something, not nothing, is drawn. */
-final class Pictures {
+public final class Pictures {
 
     /**
      * Minimum standard deviation of the grey level (0..255) for a picture to count as "not blank": a white page
      * with a frame and a few tick labels already exceeds it only slightly, a drawn chart by far (common practice,
      * no source; chosen from the charts' own numbers, 20–60).
      */
-    static final double NOT_BLANK_STDDEV = 10;
+    public static final double NOT_BLANK_STDDEV = 10;
 
     private Pictures() {
     }
 
     /** Decodes a PNG file and checks its size and that it is not blank. */
-    static BufferedImage png(Path p, int width, int height) throws IOException {
+    public static BufferedImage png(Path p, int width, int height) throws IOException {
         assertTrue(Files.size(p) > 0, p + " is empty");
         BufferedImage img = ImageIO.read(p.toFile());
         assertTrue(img != null, p + " does not decode as an image");
@@ -39,12 +39,12 @@ final class Pictures {
     }
 
     /** Decodes PNG bytes. */
-    static BufferedImage png(byte[] bytes) throws IOException {
+    public static BufferedImage png(byte[] bytes) throws IOException {
         return ImageIO.read(new ByteArrayInputStream(bytes));
     }
 
     /** Parses an SVG file as XML (the external DTD is not fetched) and checks the root element and its size. */
-    static Document svg(Path p, int width, int height) throws Exception {
+    public static Document svg(Path p, int width, int height) throws Exception {
         DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
         f.setNamespaceAware(true);
         f.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
@@ -57,7 +57,7 @@ final class Pictures {
     }
 
     /** Standard deviation of the grey level over all pixels. */
-    static double greyStdDev(BufferedImage img) {
+    public static double greyStdDev(BufferedImage img) {
         double s = 0;
         double s2 = 0;
         long n = 0;
@@ -75,7 +75,7 @@ final class Pictures {
     }
 
     /** Number of pixels within {@code tol} (per channel) of a colour. */
-    static int count(BufferedImage img, Color c, int tol) {
+    public static int count(BufferedImage img, Color c, int tol) {
         int k = 0;
         for (int y = 0; y < img.getHeight(); y++) {
             for (int x = 0; x < img.getWidth(); x++) {
@@ -87,13 +87,13 @@ final class Pictures {
         return k;
     }
 
-    static boolean near(int rgb, Color c, int tol) {
+    public static boolean near(int rgb, Color c, int tol) {
         return Math.abs(((rgb >> 16) & 255) - c.getRed()) <= tol && Math.abs(((rgb >> 8) & 255) - c.getGreen()) <= tol
                 && Math.abs((rgb & 255) - c.getBlue()) <= tol;
     }
 
     /** A translucent colour as it appears over white. */
-    static Color overWhite(Color c) {
+    public static Color overWhite(Color c) {
         double a = c.getAlpha() / 255.0;
         return new Color((int) Math.round(255 + (c.getRed() - 255) * a), (int) Math.round(255 + (c.getGreen() - 255) * a),
                 (int) Math.round(255 + (c.getBlue() - 255) * a));
@@ -103,7 +103,7 @@ final class Pictures {
      * Finds the drawn curve of colour c: {leftmost column, rightmost column, mean column of the topmost row}.
      * Pixels of exactly the curve colour only (anti-aliased edges differ), so grid lines and text never count.
      */
-    static double[] curveExtent(BufferedImage img, Color c) {
+    public static double[] curveExtent(BufferedImage img, Color c) {
         int left = Integer.MAX_VALUE;
         int right = -1;
         int topY = Integer.MAX_VALUE;
