@@ -91,11 +91,11 @@ public final class TraceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        TraceOptions o = options();
         if ((restart == null) != (row == null)) {
             throw new ParameterException(spec.commandLine(), "--restart and --row go together");
         }
         Case c = caseOptions.load();
+        TraceOptions o = options(c);
         TracePlots.Measure m;
         try {
             m = TracePlots.Measure.parse(measure, c);
@@ -134,7 +134,7 @@ public final class TraceCommand implements Callable<Integer> {
         return 0;
     }
 
-    private TraceOptions options() {
+    private TraceOptions options(Case c) {
         int eq = along.indexOf('=');
         int colon = along.indexOf(':', eq + 1);
         if (eq <= 0 || colon < 0) {
@@ -143,12 +143,9 @@ public final class TraceCommand implements Callable<Integer> {
         String name = along.substring(0, eq).trim();
         double from;
         double to;
-        try {
-            from = Double.parseDouble(along.substring(eq + 1, colon).trim());
-            to = Double.parseDouble(along.substring(colon + 1).trim());
-        } catch (NumberFormatException e) {
-            throw new ParameterException(spec.commandLine(), "--along expects numbers FROM:TO, found '" + along + "'");
-        }
+        // FROM and TO may carry units; a plain number is in the unit the case gave the parameter (SI inside)
+        from = c.parseValue(name, along.substring(eq + 1, colon).trim());
+        to = c.parseValue(name, along.substring(colon + 1).trim());
         if (step != null && !(step > 0 && Double.isFinite(step))) {
             throw new ParameterException(spec.commandLine(), "--step must be a positive number, found " + step);
         }

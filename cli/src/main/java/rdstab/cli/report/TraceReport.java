@@ -51,7 +51,7 @@ public final class TraceReport {
         String name = r.options().name();
         w.println(c.title());
         w.println("case " + c.source() + " | " + c.shape().word() + ", " + c.mesh().cells() + " cells | traced " + name + " from "
-                + sig(r.options().from(), 8) + " towards " + sig(r.options().to(), 8));
+                + pv(r, r.options().from(), 8) + " towards " + pv(r, r.options().to(), 8));
         w.printf(Locale.ROOT, "Branch: %d rows, %d steps (%d rejected and retried shorter); stopped: %s%n", r.rows().size(),
                 r.steps(), r.rejected(), r.stopReason());
         w.println();
@@ -60,7 +60,7 @@ public final class TraceReport {
             w.println("  none found along the traced part");
         }
         for (SpecialPoint sp : r.specialPoints()) {
-            w.printf(Locale.ROOT, "  %-20s %s = %s   %s   row %d%s%n", sp.kind().word(), name, sig(sp.parameter(), 10),
+            w.printf(Locale.ROOT, "  %-20s %s = %s   %s   row %d%s%n", sp.kind().word(), name, pv(r, sp.parameter(), 10),
                     maxText(sp.max()), sp.row(), sp.located() ? "" : " (not located: between steps)");
             w.printf(Locale.ROOT, "      %s; crossing eigenvalue %s (residual %.1e)%n", meaning(sp),
                     complex(sp.critical().re(), sp.critical().im()), sp.critical().residual());
@@ -71,8 +71,8 @@ public final class TraceReport {
         w.println();
         w.println("Stability along the branch");
         for (Segment s : segments(r)) {
-            w.printf(Locale.ROOT, "  rows %3d-%-3d  %s %s .. %s  %s%n", s.fromRow(), s.toRow(), name, sig(s.fromParameter(), 8),
-                    sig(s.toParameter(), 8), s.stability());
+            w.printf(Locale.ROOT, "  rows %3d-%-3d  %s %s .. %s  %s%n", s.fromRow(), s.toRow(), name, pv(r, s.fromParameter(), 8),
+                    pv(r, s.toParameter(), 8), s.stability());
         }
         w.println();
         rows(r, w);
@@ -102,7 +102,7 @@ public final class TraceReport {
         w.println(h);
         for (BranchRow row : r.rows()) {
             StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "  %4d %11s %14s %12s", row.row(), sig(row.arclength(), 6),
-                    sig(row.parameter(), 10), sig(row.norm(), 6)));
+                    pv(r, row.parameter(), 10), sig(row.norm(), 6)));
             for (String f : fields) {
                 sb.append(String.format(Locale.ROOT, " %12s", sig(row.max().get(f), 7)));
             }
@@ -187,5 +187,30 @@ public final class TraceReport {
         m.put("warnings", r.warnings());
         m.put("cautions", r.cautions());
         return m;
+    }
+
+    /** A value of the traced parameter in the unit the case gave it (with the unit), else plain. */
+    static String pv(TraceResult r, double si, int digits) {
+        Case c = r.theCase();
+        String name = r.options().name();
+        javax.measure.Unit<?> u = c.physical().units().get(name);
+        if (u == null) {
+            return sig(si, digits);
+        }
+        return sig(rdstab.solver.units.QuantityParser.fromSi(si, u), digits) + " " + c.unitText(name);
+    }
+
+    /** The stop reason with a "reached NAME = value" shown in the case's unit. */
+    static String stopText(TraceResult r) {
+        String text = r.stopReason();
+        String prefix = "reached " + r.options().name() + " = ";
+        if (text != null && text.startsWith(prefix) && r.theCase().physical().units().containsKey(r.options().name())) {
+            try {
+                return prefix + pv(r, Double.parseDouble(text.substring(prefix.length()).trim()), 8);
+            } catch (NumberFormatException e) {
+                return text;
+            }
+        }
+        return text;
     }
 }
