@@ -64,4 +64,26 @@ class PhysicalCriticalTest {
         assertEquals(2, bad.code());
         assertTrue(bad.err().contains("dimension"), bad.err());
     }
+
+    @Test
+    void sweepAndCriticalDrawTheirPictures() throws IOException {
+        Path f = tmp.resolve("body.yaml");
+        Files.writeString(f, BODY.replace("mesh: {cells: 200}", "mesh: {cells: 40}"));
+        Path pics = tmp.resolve("pics");
+        CliRun s = CliRun.of("sweep", f.toString(), "--vary", "Ta=20:50:7", "--out", tmp.resolve("s.csv").toString(),
+                "--quiet", "--plots", pics.toString());
+        assertEquals(0, s.code(), s.err());
+        // the sweep crosses the critical ambient temperature: both stable points and points without a steady state
+        String csv = Files.readString(tmp.resolve("s.csv"));
+        assertTrue(csv.contains(",stable,") && csv.contains("no steady state"), csv);
+        for (String name : new String[] {"growth.png", "growth.svg"}) {
+            assertTrue(Files.size(pics.resolve(name)) > 1000, name);
+        }
+        java.awt.image.BufferedImage img = javax.imageio.ImageIO.read(pics.resolve("growth.png").toFile());
+        assertTrue(img.getWidth() > 200 && img.getHeight() > 200);
+        Path pc = tmp.resolve("pc");
+        CliRun c = CliRun.of("critical", f.toString(), "--vary", "Ta=20:50", "--plots", pc.toString());
+        assertEquals(0, c.code(), c.err());
+        assertTrue(javax.imageio.ImageIO.read(pc.resolve("growth.png").toFile()) != null);
+    }
 }

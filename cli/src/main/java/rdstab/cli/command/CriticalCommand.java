@@ -63,6 +63,11 @@ public final class CriticalCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print the result JSON of the check at the critical value with a \"critical\" member.")
     boolean json;
 
+    @Option(names = "--plots", paramLabel = "DIR",
+            description = "Draw the growth rate of the coarse scan against the parameter (stable and unstable ranges shaded, "
+                    + "points without a steady state marked) as PNG and SVG into DIR.")
+    java.nio.file.Path plots;
+
     @Option(names = "--debug", description = "Show stack traces on errors.")
     boolean debug;
 
@@ -74,6 +79,9 @@ public final class CriticalCommand implements Callable<Integer> {
         double tol = tolerance != null ? tolerance : CriticalFinder.defaultTolerance(range);
         CriticalPoint r = CriticalFinder.find(c, range, tol, scan);
         PrintWriter w = spec.commandLine().getOut();
+        if (plots != null) {
+            rdstab.cli.plot.SweepPlots.write(c, r, plots);
+        }
         if (json) {
             w.println(ResultJson.write(toMap(r)));
         } else {

@@ -103,6 +103,11 @@ public final class SweepCommand implements Callable<Integer> {
                     + "first, interpolated between grid points (see docs/cluster.md). Needs the whole sweep.")
     Path neutralCurve;
 
+    @Option(names = "--plots", paramLabel = "DIR",
+            description = "Draw the growth rate against the parameter with stable and unstable ranges shaded (one --vary), "
+                    + "or the growth-rate map and the neutral curve (two --vary), as PNG and SVG into DIR. Needs the whole sweep.")
+    Path plots;
+
     @Option(names = "--debug", description = "Show stack traces on errors.")
     boolean debug;
 
@@ -149,6 +154,14 @@ public final class SweepCommand implements Callable<Integer> {
         }
         if (neutralCurve != null) {
             writeCurve(w, paths[1], grid, sh);
+        }
+        if (plots != null) {
+            if (sh.count() > 1) {
+                w.println("Pictures not drawn: this run is one shard; merge the shards first.");
+            } else {
+                int k = rdstab.cli.plot.SweepPlots.write(c, grid, paths[1], plots).size();
+                w.println(k + " pictures written to " + plots + " (PNG and SVG)");
+            }
         }
         w.println();
         w.println("Cautions");

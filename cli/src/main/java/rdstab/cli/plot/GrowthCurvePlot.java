@@ -70,7 +70,7 @@ public final class GrowthCurvePlot {
             s.setLineStyle(PlotStyle.SOLID);
         }
         if (!badP.isEmpty()) {
-            XYSeries b = c.addSeries("no result", badP, new ArrayList<>(java.util.Collections.nCopies(badP.size(), 0.0)));
+            XYSeries b = c.addSeries("no steady state or not converged", badP, new ArrayList<>(java.util.Collections.nCopies(badP.size(), 0.0)));
             b.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             b.setMarker(SeriesMarkers.CROSS);
             b.setMarkerColor(Palette.line(3));

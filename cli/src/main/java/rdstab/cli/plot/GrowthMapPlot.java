@@ -88,7 +88,7 @@ public final class GrowthMapPlot {
         List<Double>[] no = points(a, b, growth, 0);
         marks(c, "stable", st, SeriesMarkers.CIRCLE, Palette.line(0));
         marks(c, "unstable", un, SeriesMarkers.TRIANGLE_UP, Palette.line(1));
-        marks(c, "no result", no, SeriesMarkers.CROSS, Palette.line(3));
+        marks(c, "no steady state or not converged", no, SeriesMarkers.CROSS, Palette.line(3));
         List<List<Double>> curve = neutralCurve(a, b, growth);
         if (!curve.get(0).isEmpty()) {
             XYSeries s = c.addSeries("neutral curve (growth rate 0)", curve.get(0), curve.get(1));
@@ -153,7 +153,7 @@ public final class GrowthMapPlot {
                 cells[k++] = new int[] {i * nb + j, (i + 1) * nb + j, (i + 1) * nb + j + 1, i * nb + j + 1};
             }
         }
-        return FieldMapPlot.chart("Growth rate max Re λ (blue stable, white neutral, red unstable)", aName, bName,
+        return FieldMapPlot.chart("Growth rate max Re λ (blue stable, red unstable; blank: no steady state)", aName, bName,
                 Raster.sample(x, y, cells, v, pixels, pixels * 3 / 5), true, PlotStyle.HEIGHT);
     }
 
