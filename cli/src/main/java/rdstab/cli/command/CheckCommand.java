@@ -100,6 +100,10 @@ public final class CheckCommand implements Callable<Integer> {
         CheckResult r;
         try {
             if (verify) {
+                if (c.mesh().cells() <= 0) {
+                    throw new rdstab.solver.error.InputException("command line", "--cells", "a grid study refines by cell "
+                            + "count; this case gives an element size or its own mesh: pass --cells N (elements across the body)");
+                }
                 int[] a = GridStudy.around(c.mesh().cells(), 2.0);
                 study = GridStudy.run(c, new int[] {a[0], a[1], a[2]}, a[3], null);
                 r = withGridBand(study);

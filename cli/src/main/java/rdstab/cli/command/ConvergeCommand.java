@@ -70,6 +70,10 @@ public final class ConvergeCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Case c = caseOptions.load();
+        if (c.mesh().cells() <= 0) {
+            throw new rdstab.solver.error.InputException("command line", "--cells", "a grid study refines by cell "
+                    + "count; this case gives an element size or its own mesh: pass --cells N (elements across the body)");
+        }
         int[] cells = GridStudy.refined(c.mesh().cells(), levels, ratio);
         GridStudyResult r = GridStudy.run(c, cells, cells.length - 1, null);
         ConvergePlots.Written pictures = plots == null ? null : ConvergePlots.write(r, plots, force);

@@ -115,8 +115,9 @@ public final class GridStudy {
             throw new IllegalArgumentException("need >= 3 levels and the reported level among the two finest, got "
                     + Arrays.toString(cells) + " anchor " + anchor);
         }
-        if (c.shape().dimension() != 1) {
-            throw new InputException(c.source(), "geometry/shape", "the grid study supports 1D shapes (slab, cylinder, sphere) so far");
+        if (c.shape() == rdstab.solver.model.Shape.MESH_FILE) {
+            throw new InputException(c.source(), "geometry/shape", "a mesh read from a file cannot be refined by rdstab; "
+                    + "a grid study needs a shape that rdstab meshes itself");
         }
         CheckResult[] checks = new CheckResult[n];
         int done = 0;

@@ -3,7 +3,8 @@ package rdstab.solver.verify;
 import rdstab.mesh.assembly.Discretization;
 
 /**
- * Piecewise-linear transfer of nodal values between two 1D grids of the same interval.
+ * Piecewise-linear transfer of nodal values between two 1D grids of the same interval (2D meshes:
+ * {@link PlaneTransfer}).
  *
  * <p>For a target node at x with x_i ≤ x ≤ x_{i+1} on the source grid, the value is
  * v_i + (v_{i+1} − v_i)(x − x_i)/(x_{i+1} − x_i): exact at coinciding nodes (nested grids) and second-order
@@ -21,8 +22,11 @@ public final class NodalInterpolation {
      * @throws IllegalArgumentException when either discretization is not one-dimensional
      */
     public static double[][] transfer(Discretization from, double[][] values, Discretization to) {
+        if (from.dimension() == 2 && to.dimension() == 2) {
+            return PlaneTransfer.transfer(from, values, to);
+        }
         if (from.dimension() != 1 || to.dimension() != 1) {
-            throw new IllegalArgumentException("grid transfer is implemented for 1D grids only (got dimensions "
+            throw new IllegalArgumentException("grid transfer needs two meshes of the same dimension (got dimensions "
                     + from.dimension() + " and " + to.dimension() + ")");
         }
         int ns = from.nodes();
