@@ -45,12 +45,16 @@ class SweepResumeTest {
     static List<String> jsonRows;
 
     static CliRun sweep(Path dir, String out, String... more) throws IOException {
+        return sweepShard(dir, "0/1", out, more);
+    }
+
+    static CliRun sweepShard(Path dir, String shard, String out, String... more) throws IOException {
         Path c = dir.resolve("slab.yaml");
         if (!Files.exists(c)) {
             Files.writeString(c, SweepCommandTest.SLAB.replace("cells: 60", "cells: 30"));
         }
         String[] base = {"sweep", c.toString(), "--vary", "delta=0.3:1.0:15", "--vary", "Bi=2:20:2", "--chain-length", "4",
-            "--shard", "0/1", "--threads", "2", "--quiet", "--out", dir.resolve(out).toString()};
+            "--shard", shard, "--threads", "2", "--quiet", "--out", dir.resolve(out).toString()};
         String[] all = new String[base.length + more.length];
         System.arraycopy(base, 0, all, 0, base.length);
         System.arraycopy(more, 0, all, base.length, more.length);
@@ -154,5 +158,30 @@ class SweepResumeTest {
         // a kill while the journal was being rewritten leaves FILE.pending.tmp beside the journal
         Files.writeString(tmp.resolve("run.pending.tmp"), journalLine(3).substring(0, 40));
         assertEqualsReference(resume(head(csv, 2, 2), head(jsonl, 1, 2), journalLine(4)));
+    }
+
+    @Test
+    void shardResumedFromItsJournal() throws IOException {
+        // shard 1 of 2 owns chains 1, 3, 5, 7 (4 points per chain along delta, 15 values, 2 Bi values): points
+        // 4-7, 12-14, 19-22, 27-29, in that order. Killed in a drain: the files hold 4-7 and 12, the journal 12, 13,
+        // 14 and 19 (12 already in both files). The rows of a shard are the rows of the whole sweep (merge equals the single process).
+        CliRun ref = sweepShard(tmp, "1/2", "part.csv");
+        assertEquals(0, ref.code(), ref.err());
+        Path csvRef = tmp.resolve("part.shard1of2.csv");
+        Path jsonRef = tmp.resolve("part.shard1of2.jsonl");
+        byte[] wantCsv = Files.readAllBytes(csvRef);
+        byte[] wantJson = Files.readAllBytes(jsonRef);
+        String shardCsv = Files.readString(csvRef);
+        String shardJson = Files.readString(jsonRef);
+        Files.writeString(csvRef, head(shardCsv, 2, 5));
+        Files.writeString(jsonRef, head(shardJson, 1, 5));
+        Files.writeString(tmp.resolve("part.shard1of2.pending"), journalLine(12) + journalLine(13) + journalLine(14)
+                + journalLine(19));
+        CliRun r = sweepShard(tmp, "1/2", "part.csv", "--resume");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("; 6 computed now, 8 kept from the earlier run"), r.out());
+        assertArrayEquals(wantCsv, Files.readAllBytes(csvRef));
+        assertArrayEquals(wantJson, Files.readAllBytes(jsonRef));
+        assertFalse(Files.exists(tmp.resolve("part.shard1of2.pending")));
     }
 }

@@ -106,7 +106,7 @@ public final class SweepOutput implements AutoCloseable {
         FileChannel lock = FileChannel.open(journalOf(paths[1]).resolveSibling(journalOf(paths[1]).getFileName() + ".lock"),
                 StandardOpenOption.CREATE, StandardOpenOption.WRITE);
         try {
-            if (lock.tryLock() == null) {
+            if (tryLock(lock) == null) {
                 throw new java.nio.file.FileSystemException(paths[0] + ": another rdstab sweep is writing this output now; "
                         + "wait for it, or give this run another --out");
             }
@@ -116,6 +116,15 @@ public final class SweepOutput implements AutoCloseable {
         } catch (IOException | RuntimeException e) {
             lock.close();
             throw e;
+        }
+    }
+
+    /** The OS lock, or null when another process (or another run in this JVM) holds it. */
+    private static java.nio.channels.FileLock tryLock(FileChannel ch) throws IOException {
+        try {
+            return ch.tryLock();
+        } catch (java.nio.channels.OverlappingFileLockException e) {
+            return null;
         }
     }
 

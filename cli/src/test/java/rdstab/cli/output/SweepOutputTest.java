@@ -96,4 +96,19 @@ class SweepOutputTest {
         assertEquals(CSV_HEAD + csvRow(0) + csvRow(1) + csvRow(2) + csvRow(3), Files.readString(paths()[0]));
         assertTrue(Files.notExists(SweepOutput.journalOf(paths()[1])), "journal removed once everything is written");
     }
+
+    @Test
+    void secondWriterIsRefusedAndTheLockIsFreedOnClose() throws IOException {
+        int[] points = {0, 1};
+        try (SweepOutput o = open(points, false)) {
+            o.accept(0, csvRow(0), jsonRow(0));
+            IOException e = assertThrows(IOException.class, () -> open(points, true));
+            assertTrue(e.getMessage().contains("another rdstab sweep is writing"), e.getMessage());
+        }
+        try (SweepOutput again = open(points, true)) {
+            assertEquals(1, again.resumed());
+            again.accept(1, csvRow(1), jsonRow(1));
+            again.verifyComplete();
+        }
+    }
 }
