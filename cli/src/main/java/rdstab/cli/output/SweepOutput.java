@@ -27,8 +27,11 @@ import rdstab.cli.report.ResultJson;
  *
  * <p><b>Resume.</b> The finished rows are the longest prefix of the shard's points present, complete
  * and in order in both files; the files are truncated to it. Journal entries for later points are
- * taken back; the journal is then rewritten (temporary file, fsync, atomic rename). The journal is
- * deleted when the run completes.
+ * taken back, and those that continue the files are written at once (a run killed while it moved
+ * journal rows into the files leaves the next point in the journal, and that point is not computed
+ * again); the journal is then rewritten (temporary file, fsync, atomic rename: a kill leaves the old
+ * or the new journal, never none). The journal is deleted when the run completes; before that,
+ * {@link #verifyComplete} reads both files back and fails when a point is missing.
  *
  * <p><b>One writer.</b> An OS lock on {@code FILE.pending.lock} (an empty file that stays) is held while
  * a run writes; a second run on the same output is refused instead of interleaving rows.
