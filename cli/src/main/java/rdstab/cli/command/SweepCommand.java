@@ -54,7 +54,9 @@ import rdstab.solver.sweep.SweepRunner;
             "",
             "On a Slurm job array the shard comes from SLURM_ARRAY_TASK_ID and SLURM_ARRAY_TASK_COUNT (or _MIN/_MAX) "
                 + "when --shard is not given; see docs/cluster.md."},
-        footer = {"", "Exit status: 0 the sweep completed (whatever the verdicts and statuses), 2 bad input, 4 file error."})
+        footer = {"", "Exit status: 0 the sweep completed, every point of it (or of the shard) is in both files (whatever the "
+                + "verdicts and statuses), 2 bad input, 4 file error (also when, after the run, the files do not hold every "
+                + "point)."})
 public final class SweepCommand implements Callable<Integer> {
 
     /** Default points per warm-start chain. */
@@ -150,6 +152,7 @@ public final class SweepCommand implements Callable<Integer> {
                 computed.incrementAndGet();
                 bar.step();
             });
+            o.verifyComplete();
             summary(w, grid, sh, points.length, o, computed.get(), counts);
         }
         if (neutralCurve != null) {

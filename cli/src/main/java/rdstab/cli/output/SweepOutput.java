@@ -27,8 +27,11 @@ import rdstab.cli.report.ResultJson;
  *
  * <p><b>Resume.</b> The finished rows are the longest prefix of the shard's points present, complete
  * and in order in both files; the files are truncated to it. Journal entries for later points are
- * taken back; the journal is then rewritten (temporary file, fsync, atomic rename). The journal is
- * deleted when the run completes.
+ * taken back, and those that continue the files are written at once (a run killed while it moved
+ * journal rows into the files leaves the next point in the journal, and that point is not computed
+ * again); the journal is then rewritten (temporary file, fsync, atomic rename: a kill leaves the old
+ * or the new journal, never none). The journal is deleted when the run completes; before that,
+ * {@link #verifyComplete} reads both files back and fails when a point is missing.
  *
  * <p><b>One writer.</b> An OS lock on {@code FILE.pending.lock} (an empty file that stays) is held while
  * a run writes; a second run on the same output is refused instead of interleaving rows.
@@ -46,13 +49,16 @@ public final class SweepOutput implements AutoCloseable {
     private final Map<Integer, Integer> position = new HashMap<>();
     private final TreeMap<Integer, String[]> waiting = new TreeMap<>();
     private final int[] points;
+    /** CSV columns per row. */
+    private final int columns;
     private int next;
     private final int resumed;
     /** Status of the points finished before this run started (resumed rows and journal entries). */
     private final Map<Integer, rdstab.solver.sweep.PointStatus> earlier = new HashMap<>();
 
-    private SweepOutput(Path[] paths, int[] points, int done, Map<Integer, String[]> pending, List<SweepFiles.Line> kept)
-            throws IOException {
+    private SweepOutput(Path[] paths, int columns, int[] points, int done, Map<Integer, String[]> pending,
+                        List<SweepFiles.Line> kept) throws IOException {
+        this.columns = columns;
         this.csvPath = paths[0];
         this.jsonPath = paths[1];
         this.journalPath = journalOf(paths[1]);
@@ -61,7 +67,7 @@ public final class SweepOutput implements AutoCloseable {
             position.put(points[i], i);
         }
         this.next = done;
-        this.resumed = done;
+        this.resumed = done + pending.size();
         pending.forEach((p, rows) -> waiting.put(position.get(p), rows));
         for (int i = 0; i < done; i++) {
             earlier.put(kept.get(i).point(), status(kept.get(i).text()));
@@ -71,6 +77,10 @@ public final class SweepOutput implements AutoCloseable {
         json = FileChannel.open(jsonPath, StandardOpenOption.WRITE);
         csv.position(csv.size());
         json.position(json.size());
+        // Journal rows that continue the files are written now: they will not be computed again (the runner
+        // skips finished points), so no later accept() of the point at `next` would ever release them. A run
+        // killed while it drained the journal into the files leaves exactly this state.
+        drainWaiting();
         rewriteJournal();
     }
 
@@ -99,7 +109,7 @@ public final class SweepOutput implements AutoCloseable {
         FileChannel lock = FileChannel.open(journalOf(paths[1]).resolveSibling(journalOf(paths[1]).getFileName() + ".lock"),
                 StandardOpenOption.CREATE, StandardOpenOption.WRITE);
         try {
-            if (lock.tryLock() == null) {
+            if (tryLock(lock) == null) {
                 throw new java.nio.file.FileSystemException(paths[0] + ": another rdstab sweep is writing this output now; "
                         + "wait for it, or give this run another --out");
             }
@@ -109,6 +119,15 @@ public final class SweepOutput implements AutoCloseable {
         } catch (IOException | RuntimeException e) {
             lock.close();
             throw e;
+        }
+    }
+
+    /** The OS lock, or null when another process (or another run in this JVM) holds it. */
+    private static java.nio.channels.FileLock tryLock(FileChannel ch) throws IOException {
+        try {
+            return ch.tryLock();
+        } catch (java.nio.channels.OverlappingFileLockException e) {
+            return null;
         }
     }
 
@@ -132,14 +151,14 @@ public final class SweepOutput implements AutoCloseable {
                 truncate(paths[0], done == 0 ? c.headerEnd() : c.lines().get(done - 1).end());
                 truncate(paths[1], done == 0 ? j.headerEnd() : j.lines().get(done - 1).end());
                 pending = readJournal(journalOf(paths[1]), points, done, columns);
-                return new SweepOutput(paths, points, done, pending, j.lines());
+                return new SweepOutput(paths, columns, points, done, pending, j.lines());
             }
         }
         fresh(paths[0], csvHead);
         fresh(paths[1], jsonHead);
         Files.deleteIfExists(journalOf(paths[1]));
         syncDirectory(dir);
-        return new SweepOutput(paths, points, 0, pending, List.of());
+        return new SweepOutput(paths, columns, points, 0, pending, List.of());
     }
 
     private static void sameSweep(Path file, String found, String expected) {
@@ -269,6 +288,11 @@ public final class SweepOutput implements AutoCloseable {
             return;
         }
         write(csvRow, jsonRow);
+        drainWaiting();
+    }
+
+    /** Writes the waiting rows that continue the files (the point at {@code next} and those after it). */
+    private void drainWaiting() throws IOException {
         while (!waiting.isEmpty() && waiting.firstKey() == next) {
             String[] rows = waiting.pollFirstEntry().getValue();
             write(rows[0], rows[1]);
@@ -283,9 +307,14 @@ public final class SweepOutput implements AutoCloseable {
         next++;
     }
 
+    /**
+     * Replaces the journal by the rows still waiting. The old journal stays until the atomic rename, so a
+     * kill at any instant leaves either the old journal or the new one, never none (the entries of the old
+     * one that are already in the files are ignored on resume).
+     */
     private void rewriteJournal() throws IOException {
-        Files.deleteIfExists(journalPath);
         if (waiting.isEmpty()) {
+            Files.deleteIfExists(journalPath);
             return;
         }
         StringBuilder sb = new StringBuilder();
@@ -308,6 +337,36 @@ public final class SweepOutput implements AutoCloseable {
         return next == points.length;
     }
 
+    /**
+     * The self-check at the end of a run: every point of this run (shard) is written, and both files as
+     * they are now on disk hold exactly these points, complete and in order, with nothing after them.
+     * A sweep must never end "successfully" with points missing.
+     *
+     * @throws IOException (exit status 4) naming the file and the first missing or unexpected point
+     */
+    public synchronized void verifyComplete() throws IOException {
+        if (next != points.length) {
+            throw new IOException(csvPath + ": the sweep ended with " + (points.length - next) + " of its " + points.length
+                    + " points not written (first missing: point " + points[next] + "); the finished rows are kept in "
+                    + csvPath.getFileName() + ", " + jsonPath.getFileName() + " and " + journalPath.getFileName()
+                    + "; run the same command with --resume to complete it");
+        }
+        check(csvPath, SweepFiles.read(csvPath, true, columns));
+        check(jsonPath, SweepFiles.read(jsonPath, false, 0));
+    }
+
+    private void check(Path file, SweepFiles.Contents c) throws IOException {
+        List<SweepFiles.Line> lines = c.lines();
+        int n = prefix(lines, lines, points);
+        if (n != points.length || lines.size() != points.length || c.torn()) {
+            String what = n < points.length ? "point " + points[n] + " is missing or out of place"
+                    : "something follows the last point";
+            throw new IOException(file + ": after the sweep the file does not hold exactly the " + points.length
+                    + " points of this run in order (" + what + "); it was changed while the sweep ran, or this is a "
+                    + "defect: run the same command with --resume to repair it");
+        }
+    }
+
     /** Closes the files; deletes the journal when every point is written. */
     @Override
     public synchronized void close() throws IOException {
@@ -320,6 +379,7 @@ public final class SweepOutput implements AutoCloseable {
         } finally {
             if (complete()) {
                 Files.deleteIfExists(journalPath);
+                Files.deleteIfExists(journalPath.resolveSibling(journalPath.getFileName() + ".tmp"));
             }
             if (lock != null) {
                 lock.close();
