@@ -41,7 +41,9 @@ import rdstab.solver.linear.SymbolicAnalysis;
  * never exceeds the i-th largest eigenvalue (Cauchy interlacing) and lies within its residual of an
  * eigenvalue, so all k are the largest ν unless the Krylov space missed an eigenvector direction
  * entirely — the same assumption ARPACK's certificate rests on, made unlikely by the pseudo-random start
- * and by computing k + 2 pairs. The returned set is therefore the k rightmost when σ is above the
+ * and by computing k + 2 pairs. A loose tolerance weakens it: the second copy of a double eigenvalue
+ * emerges from rounding and is amplified only while the iteration goes on (with tolerance 1e-4 both
+ * this class and ARPACK miss the (3,1) mode of a square; with 1e-8 or 0 both find it). The returned set is therefore the k rightmost when σ is above the
  * spectrum and all k converged (non-convergence throws, so a returned result always has all k).
  *
  * <p>Results go through {@link EigenChecks}: unit M-norm vectors, independent residuals
