@@ -2,8 +2,10 @@ package rdstab.solver.eigen;
 
 /**
  * Chooses an eigen-solver: dense for tiny problems (n &lt; {@link ShiftInvertArnoldi#DENSE_BELOW} or
- * when the internal Krylov count 2k + 2 does not leave room in n), shift-invert Lanczos when
- * options.symmetric(), shift-invert Arnoldi otherwise.
+ * when the internal Krylov count 2k + 2 does not leave room in n), the pure-Java
+ * {@link ThickRestartLanczos} when options.symmetric() (no global state, so sweep threads solve in
+ * parallel), shift-invert Arnoldi (ARPACK) otherwise. ARPACK's {@link ShiftInvertLanczos} stays
+ * available as the cross-check of the symmetric path.
  */
 public final class EigenSolvers {
 
@@ -15,7 +17,7 @@ public final class EigenSolvers {
         if (n < ShiftInvertArnoldi.DENSE_BELOW || 2 * options.count() + 4 > n) {
             return new DenseEigenSolver();
         }
-        return options.symmetric() ? new ShiftInvertLanczos() : new ShiftInvertArnoldi();
+        return options.symmetric() ? new ThickRestartLanczos() : new ShiftInvertArnoldi();
     }
 
     /** Solves J x = λ M x for the rightmost eigenpairs with the solver {@link #create} picks. */

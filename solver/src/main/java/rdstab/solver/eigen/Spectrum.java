@@ -10,12 +10,12 @@ import java.util.List;
  * @param requested              number of eigenpairs asked for (k)
  * @param computed               number of Ritz pairs that converged in the Krylov method (≥ k; n for the dense path)
  * @param operatorApplications   number of applications of OP = (J − σM)⁻¹M (0 for the dense path)
- * @param restarts               implicit restarts ARPACK took (0 for the dense path)
+ * @param restarts               implicit (ARPACK) or thick (Java Lanczos) restarts taken (0 for the dense path)
  * @param rightmostCertified     true when the returned set provably holds the k rightmost eigenvalues,
  *                               given the Gershgorin/Bendixson bounds and ARPACK's contract that the converged
  *                               Ritz values are the ones nearest σ (always true for the dense path)
  * @param imaginaryBound         proven bound S ≥ |Im λ| for every eigenvalue (NaN when no rigorous bound was available)
- * @param method                 "dense", "arnoldi" or "lanczos"
+ * @param method                 "dense", "arnoldi", "lanczos" (ARPACK) or "lanczos-java" ({@link ThickRestartLanczos})
  * @param factorizationSeconds   wall time spent factorizing J − σM
  * @param iterationSeconds       wall time spent in the Krylov iteration and post-processing
  * @param orderingSeconds        wall time of the fill-reducing ordering and symbolic analysis (0 when a cached

@@ -130,7 +130,7 @@ class ShiftInvertSpectrumTest {
     void factoryChoosesBySizeAndSymmetry() {
         assertInstanceOf(DenseEigenSolver.class, EigenSolvers.create(EigenOptions.rightmost(2, false), 10));
         assertInstanceOf(DenseEigenSolver.class, EigenSolvers.create(EigenOptions.rightmost(40, false), 60));
-        assertInstanceOf(ShiftInvertLanczos.class, EigenSolvers.create(EigenOptions.rightmost(2, true), 1000));
+        assertInstanceOf(ThickRestartLanczos.class, EigenSolvers.create(EigenOptions.rightmost(2, true), 1000));
         assertInstanceOf(ShiftInvertArnoldi.class, EigenSolvers.create(EigenOptions.rightmost(2, false), 1000));
     }
 
