@@ -28,7 +28,8 @@ public final class SymbolicAnalysis {
     private final int[] rowIdx;
     private final int[] perm;
     private final CholeskySymbolic cholesky;
-    private final int[] luTarget;
+    /** Entry targets in A(p, p) for the pivoted fallback; computed on first need (idempotent, so a race only repeats work). */
+    private volatile int[] luTarget;
     private final CholeskySymbolic luStructure;
     private final long[] luPanelTarget;
     private final double seconds;
@@ -64,7 +65,7 @@ public final class SymbolicAnalysis {
             return new SymbolicAnalysis(true, a, c.perm, c, null, null, (System.nanoTime() - t0) * 1e-9);
         }
         CholeskySymbolic s = CholeskySymbolic.analyse(symmetrizedPattern(a), p);
-        return new SymbolicAnalysis(false, a, p, null, luTargets(a, p), s, (System.nanoTime() - t0) * 1e-9);
+        return new SymbolicAnalysis(false, a, p, null, null, s, (System.nanoTime() - t0) * 1e-9);
     }
 
     /** True when A has exactly the analysed pattern (same order, column pointers and row indices). */
@@ -95,6 +96,11 @@ public final class SymbolicAnalysis {
         if (fast != null) {
             return fast;
         }
+        int[] target = luTarget;
+        if (target == null) {
+            target = luTargets(a, perm);
+            luTarget = target;
+        }
         DMatrixSparseCSC pa = new DMatrixSparseCSC(n, n, a.nz_length);
         int[] pinvCols = new int[n + 1];
         int[] pinv = new int[n];
@@ -109,7 +115,7 @@ public final class SymbolicAnalysis {
         }
         System.arraycopy(pinvCols, 0, pa.col_idx, 0, n + 1);
         for (int q = 0; q < a.nz_length; q++) {
-            int t = luTarget[q];
+            int t = target[q];
             pa.nz_rows[t] = pinv[a.nz_rows[q]];
             pa.nz_values[t] = a.nz_values[q];
         }
