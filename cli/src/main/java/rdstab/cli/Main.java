@@ -29,9 +29,6 @@ import rdstab.solver.error.InputException;
             "",
             "Start with:  rdstab check cases/slab-self-heating.yaml",
             "Case files are YAML; their keys are described in cases/README.md."},
-        subcommands = {CheckCommand.class, SweepCommand.class, CriticalCommand.class, TraceCommand.class,
-            ConvergeCommand.class, SimulateCommand.class, MergeCommand.class, ExportCommand.class, SpectrumCommand.class,
-            CommandLine.HelpCommand.class},
         footerHeading = "%nExit status:%n",
         footer = {"  0  the run completed (whatever the verdict)", "  1  internal error (a bug: please report it)", "  2  bad input (usage, case file, formula, parameter)",
             "  3  numerical failure (no steady state found, eigen-solver did not converge)", "  4  input/output failure"})
@@ -57,6 +54,11 @@ public final class Main implements Runnable {
         NETLIB_LOG.setLevel(java.util.logging.Level.SEVERE);
     }
 
+    /** The subcommands, in the order 'rdstab --help' lists them. */
+    private static final java.util.List<Class<?>> SUBCOMMANDS = java.util.List.of(CheckCommand.class, SweepCommand.class,
+            CriticalCommand.class, TraceCommand.class, ConvergeCommand.class, SimulateCommand.class, MergeCommand.class,
+            ExportCommand.class, SpectrumCommand.class, CommandLine.HelpCommand.class);
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -73,7 +75,7 @@ public final class Main implements Runnable {
     /** Runs with the given writers; returns the exit status (for tests). */
     public static int execute(String[] args, PrintWriter out, PrintWriter err) {
         boolean debug = java.util.Arrays.asList(args).contains("--debug");
-        CommandLine cl = commandLine();
+        CommandLine cl = commandLine(args.length > 0 ? args[0] : "");
         cl.setOut(out);
         cl.setErr(err);
         cl.setExecutionExceptionHandler((ex, line, parsed) -> handle(ex, line.getErr(), debug));
@@ -90,9 +92,31 @@ public final class Main implements Runnable {
         return code;
     }
 
-    /** The configured command line. */
+    /** The configured command line with every subcommand. */
     public static CommandLine commandLine() {
+        return commandLine("");
+    }
+
+    /**
+     * The configured command line. When {@code first} (the first argument) names a subcommand other than
+     * 'help', only that subcommand is built: picocli reflects over every option of every subcommand it is
+     * given, and building the whole tree (with the classes it loads) was most of a short run's start-up.
+     * Any other first argument ('--help', '--version', a typo) gets the whole tree, so usage and
+     * suggestions are unchanged.
+     */
+    static CommandLine commandLine(String first) {
         CommandLine cl = new CommandLine(new Main());
+        Class<?> only = null;
+        for (Class<?> c : SUBCOMMANDS) {
+            if (c != CommandLine.HelpCommand.class && c.getAnnotation(Command.class).name().equals(first)) {
+                only = c;
+            }
+        }
+        for (Class<?> c : SUBCOMMANDS) {
+            if (only == null || c == only) {
+                cl.addSubcommand(c);
+            }
+        }
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpAutoWidth(true);
         return cl;

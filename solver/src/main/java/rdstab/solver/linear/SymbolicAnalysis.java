@@ -10,10 +10,13 @@ import org.ejml.data.DMatrixSparseCSC;
  * pattern is fixed by the mesh), shifts σM − J, continuation steps and sweep points — so a
  * refactorization costs only the numeric phase.
  *
- * <p><b>Where reuse is partial.</b> For LU with partial pivoting only the column ordering and the
- * permutation of the entries are reused: the row pivots, and with them the patterns of L and U,
- * depend on the values and are recomputed by every numeric factorization. A Cholesky needs no
- * pivoting, so its whole structure is reused.
+ * <p><b>LU.</b> A general matrix is first factorized without row interchanges by
+ * {@link SupernodalLU} on the Cholesky structure of the symmetrized pattern A + Aᵀ (whole structure
+ * reused, dense supernodal kernels). When that is refused (a round-off-level pivot, or a backward
+ * error of a test solve above {@link SupernodalLU#BACKWARD_ERROR_LIMIT}), LU with partial pivoting
+ * ({@link SparseLU}) runs on the same ordering; there only the column ordering and the permutation
+ * of the entries are reused, since the row pivots, and with them the patterns of L and U, depend on
+ * the values.
  *
  * <p>Immutable and thread-safe; {@link #factor} returns a new factorization each call.
  */
@@ -25,11 +28,14 @@ public final class SymbolicAnalysis {
     private final int[] rowIdx;
     private final int[] perm;
     private final CholeskySymbolic cholesky;
-    private final int[] luTarget;
+    /** Entry targets in A(p, p) for the pivoted fallback; computed on first need (idempotent, so a race only repeats work). */
+    private volatile int[] luTarget;
+    private final CholeskySymbolic luStructure;
+    private final long[] luPanelTarget;
     private final double seconds;
 
     private SymbolicAnalysis(boolean spd, DMatrixSparseCSC a, int[] perm, CholeskySymbolic cholesky, int[] luTarget,
-                             double seconds) {
+                             CholeskySymbolic luStructure, double seconds) {
         this.symmetricPositive = spd;
         this.n = a.numCols;
         this.colIdx = Arrays.copyOf(a.col_idx, a.numCols + 1);
@@ -37,6 +43,8 @@ public final class SymbolicAnalysis {
         this.perm = perm;
         this.cholesky = cholesky;
         this.luTarget = luTarget;
+        this.luStructure = luStructure;
+        this.luPanelTarget = luStructure == null ? null : SupernodalLU.targets(a, luStructure);
         this.seconds = seconds;
     }
 
@@ -54,9 +62,10 @@ public final class SymbolicAnalysis {
         requirePermutation(p, a.numCols);
         if (symmetricPositive) {
             CholeskySymbolic c = CholeskySymbolic.analyse(a, p);
-            return new SymbolicAnalysis(true, a, c.perm, c, null, (System.nanoTime() - t0) * 1e-9);
+            return new SymbolicAnalysis(true, a, c.perm, c, null, null, (System.nanoTime() - t0) * 1e-9);
         }
-        return new SymbolicAnalysis(false, a, p, null, luTargets(a, p), (System.nanoTime() - t0) * 1e-9);
+        CholeskySymbolic s = CholeskySymbolic.analyse(symmetrizedPattern(a), p);
+        return new SymbolicAnalysis(false, a, p, null, null, s, (System.nanoTime() - t0) * 1e-9);
     }
 
     /** True when A has exactly the analysed pattern (same order, column pointers and row indices). */
@@ -83,6 +92,15 @@ public final class SymbolicAnalysis {
         if (symmetricPositive) {
             return SupernodalCholesky.factor(a, cholesky);
         }
+        SupernodalLU fast = SupernodalLU.tryFactor(a, luStructure, luPanelTarget);
+        if (fast != null) {
+            return fast;
+        }
+        int[] target = luTarget;
+        if (target == null) {
+            target = luTargets(a, perm);
+            luTarget = target;
+        }
         DMatrixSparseCSC pa = new DMatrixSparseCSC(n, n, a.nz_length);
         int[] pinvCols = new int[n + 1];
         int[] pinv = new int[n];
@@ -97,7 +115,7 @@ public final class SymbolicAnalysis {
         }
         System.arraycopy(pinvCols, 0, pa.col_idx, 0, n + 1);
         for (int q = 0; q < a.nz_length; q++) {
-            int t = luTarget[q];
+            int t = target[q];
             pa.nz_rows[t] = pinv[a.nz_rows[q]];
             pa.nz_values[t] = a.nz_values[q];
         }
@@ -129,6 +147,14 @@ public final class SymbolicAnalysis {
     /** Order n. */
     public int size() {
         return n;
+    }
+
+    /** Pattern of A + Aᵀ (all values 1, so nothing cancels). */
+    private static DMatrixSparseCSC symmetrizedPattern(DMatrixSparseCSC a) {
+        DMatrixSparseCSC ones = a.copy();
+        Arrays.fill(ones.nz_values, 0, ones.nz_length, 1.0);
+        DMatrixSparseCSC t = org.ejml.sparse.csc.CommonOps_DSCC.transpose(ones, null, null);
+        return SparseOps.add(1.0, ones, 1.0, t);
     }
 
     /** Destination of every entry of A in A(p, p) with row indices sorted within each column. */
