@@ -96,6 +96,7 @@ public final class ShiftInvertArnoldi implements EigenSolver {
         int nevCap = Math.max(nev, Math.min(n - 3, ENLARGEMENT_CAP * (k + 1)));
         long ops = 0;
         int restarts = 0;
+        boolean pivoted = false;
         while (true) {
             Run run = converge(lu, m, n, k, nev, options);
             ops += run.operatorApplications;
@@ -103,6 +104,15 @@ public final class ShiftInvertArnoldi implements EigenSolver {
             List<EigenChecks.Mode> modes = new ArrayList<>();
             double farthest = collect(run, sigma, n, modes);
             List<EigenPair> pairs = EigenChecks.finish(modes, k, j, m);
+            if (!pivoted && SymbolicAnalysis.withoutInterchanges(lu) && worstResidual(pairs) > PIVOT_RETRY_RESIDUAL) {
+                // the LU without row interchanges passed its backward-error test but the operator near-singular
+                // (shift very close to an eigenvalue) amplified its errors: redo with partial pivoting
+                pivoted = true;
+                double[] again = {sigma, 0.0};
+                lu = factorShifted(j, m, again, ordering, true);
+                sigma = again[0];
+                continue;
+            }
             boolean certifiable = bounds.rigorous() && sigma > bounds.reUpper() && pairs.size() >= k;
             boolean certified = false;
             if (certifiable) {
@@ -118,6 +128,17 @@ public final class ShiftInvertArnoldi implements EigenSolver {
             }
             nev = Math.min(nevCap, 2 * nev);
         }
+    }
+
+    /** Eigenpair residual above which the solve is repeated on a pivoted LU (well above a good solve's 1e-14). */
+    static final double PIVOT_RETRY_RESIDUAL = 1e-10;
+
+    private static double worstResidual(List<EigenPair> pairs) {
+        double w = 0;
+        for (EigenPair p : pairs) {
+            w = Math.max(w, p.residual());
+        }
+        return w;
     }
 
     /** One ARPACK run, repeated once with a doubled subspace and restart cap when it falls short. */
@@ -170,6 +191,12 @@ public final class ShiftInvertArnoldi implements EigenSolver {
 
     /** LU of J − σM; on SINGULAR_SHIFT moves σ (holder[0]) and retries. */
     static SparseFactorization factorShifted(DMatrixSparseCSC j, DMatrixSparseCSC m, double[] holder, Ordering ordering) {
+        return factorShifted(j, m, holder, ordering, false);
+    }
+
+    /** As {@link #factorShifted(DMatrixSparseCSC, DMatrixSparseCSC, double[], Ordering)}, optionally with row pivoting. */
+    static SparseFactorization factorShifted(DMatrixSparseCSC j, DMatrixSparseCSC m, double[] holder, Ordering ordering,
+                                             boolean pivoted) {
         double sigma0 = holder[0];
         ConvergenceException last = null;
         for (int attempt = 0; attempt <= SHIFT_RETRIES; attempt++) {
@@ -182,7 +209,7 @@ public final class ShiftInvertArnoldi implements EigenSolver {
                 if (holder.length > 1) {
                     holder[1] += (System.nanoTime() - ta) * 1e-9;
                 }
-                SparseFactorization f = analysis.factor(shifted);
+                SparseFactorization f = pivoted ? analysis.factorPivoted(shifted) : analysis.factor(shifted);
                 holder[0] = sigma;
                 return f;
             } catch (ConvergenceException e) {

@@ -96,6 +96,27 @@ public final class SymbolicAnalysis {
         if (fast != null) {
             return fast;
         }
+        return factorPivoted(a);
+    }
+
+    /** True when a factorization came from the LU without row interchanges (the fast path of {@link #factor}). */
+    public static boolean withoutInterchanges(SparseFactorization f) {
+        return f instanceof SupernodalLU;
+    }
+
+    /**
+     * LU with partial pivoting on the analysed ordering, skipping the fast path: for callers that found the
+     * fast factorization's solutions not accurate enough (e.g. a shift very close to an eigenvalue).
+     *
+     * @throws IllegalArgumentException when the analysis is a Cholesky one or the pattern differs
+     */
+    public SparseFactorization factorPivoted(DMatrixSparseCSC a) {
+        if (symmetricPositive) {
+            throw new IllegalArgumentException("a Cholesky analysis has no pivoted LU");
+        }
+        if (!matches(a)) {
+            throw new IllegalArgumentException("the matrix pattern differs from the analysed one");
+        }
         int[] target = luTarget;
         if (target == null) {
             target = luTargets(a, perm);
