@@ -31,7 +31,14 @@ import rdstab.solver.error.InputException;
             "Case files are YAML; their keys are described in cases/README.md."},
         footerHeading = "%nExit status:%n",
         footer = {"  0  the run completed (whatever the verdict)", "  1  internal error (a bug: please report it)", "  2  bad input (usage, case file, formula, parameter)",
-            "  3  numerical failure (no steady state found, eigen-solver did not converge)", "  4  input/output failure"})
+            "  3  numerical failure (no steady state found, eigen-solver did not converge)", "  4  input/output failure",
+            "",
+            "Limits (every command that reads a case):",
+            "  case files up to 1 MiB; formulas up to 10000 characters and 200 levels;",
+            "  up to 4,000,000 cells per direction; YAML aliases limited to 20.",
+            "  A case file only describes a case: formulas are evaluated by rdstab's",
+            "  own parser, a mesh file must lie in the case file's folder, nothing",
+            "  else is included or executed, no environment variable is expanded."})
 public final class Main implements Runnable {
 
     /** Exit status: completed. */
