@@ -37,9 +37,11 @@ public final class TextReport {
                 + r.problem().full().unknowns() + " unknowns | " + parameters(c));
         w.println();
         w.println("VERDICT: " + a.verdict().word().toUpperCase(Locale.ROOT) + " — " + meaning(a.verdict()));
-        w.printf(Locale.ROOT, "  growth rate      %s per unit time (undecided within ±%.1e)%n", sig(a.growthRate(), 8), a.band());
+        String per = PhysicalTerms.applies(r) ? "per conduction time" : "per unit time";
+        w.printf(Locale.ROOT, "  growth rate      %s %s (undecided within ±%.1e)%n", sig(a.growthRate(), 8), per, a.band());
         if (Double.isFinite(a.eFoldingTime())) {
-            w.printf(Locale.ROOT, "  e-folding time   %s time units (%s)%n", sig(a.eFoldingTime(), 4),
+            w.printf(Locale.ROOT, "  e-folding time   %s %s (%s)%n", sig(a.eFoldingTime(), 4),
+                    PhysicalTerms.applies(r) ? "conduction times" : "time units",
                     a.growthRate() > 0 ? "a disturbance grows by e in this time" : "a disturbance shrinks by e in this time");
         }
         if (a.frequency() != 0 && Math.abs(a.frequency()) > 1e-12) {
