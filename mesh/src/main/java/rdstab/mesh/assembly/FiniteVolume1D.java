@@ -53,7 +53,7 @@ import rdstab.mesh.grid.Grid1D;
  * (semi-)definite; the smallest μ of −J x = μ M x is the discrete Poincaré constant used by
  * energy-stability bounds.
  */
-public final class FiniteVolume1D implements Discretization {
+public final class FiniteVolume1D extends NodalLayout {
 
     private final Grid1D grid;
     private final PointKernel kernel;
@@ -61,11 +61,6 @@ public final class FiniteVolume1D implements Discretization {
     private final BoundaryCondition[] right;
     private final FaceAverage faceAverage;
     private final DriftScheme driftScheme;
-    private final int nf;
-    private final int nn;
-    private final int[][] index;      // index[node][field], −1 when fixed
-    private final double[][] fixed;   // fixed[node][field], NaN when unknown
-    private final int unknowns;
     private final double[][] driftVelocity; // [node][field], null without drift
 
     /** Same as the full constructor with {@link FaceAverage#ARITHMETIC} and {@link DriftScheme#CENTRED}. */
@@ -84,35 +79,46 @@ public final class FiniteVolume1D implements Discretization {
      */
     public FiniteVolume1D(Grid1D grid, PointKernel kernel, BoundaryCondition[] left, BoundaryCondition[] right,
                           FaceAverage faceAverage, DriftScheme driftScheme) {
+        this(prepare(grid, kernel, left, right, faceAverage, driftScheme), grid, kernel, faceAverage, driftScheme);
+    }
+
+    /** Checked conditions and the fixed values of the layout, computed before the layout is built. */
+    private record Prepared(BoundaryCondition[] left, BoundaryCondition[] right, double[] fixed) {
+    }
+
+    private FiniteVolume1D(Prepared p, Grid1D grid, PointKernel kernel, FaceAverage faceAverage, DriftScheme driftScheme) {
+        super(grid.nodeCount(), kernel.fieldCount(), p.fixed());
+        this.grid = grid;
+        this.kernel = kernel;
+        this.left = p.left();
+        this.right = p.right();
+        this.faceAverage = faceAverage;
+        this.driftScheme = driftScheme;
+        this.driftVelocity = kernel.hasDrift() ? tabulateDrift() : null;
+        checkInlets();
+    }
+
+    private static Prepared prepare(Grid1D grid, PointKernel kernel, BoundaryCondition[] left, BoundaryCondition[] right,
+                                    FaceAverage faceAverage, DriftScheme driftScheme) {
         if (grid == null || kernel == null || faceAverage == null || driftScheme == null) {
             throw new IllegalArgumentException("grid, kernel, face average and drift scheme must be given, got "
                     + grid + ", " + kernel + ", " + faceAverage + ", " + driftScheme);
         }
-        this.grid = grid;
-        this.kernel = kernel;
-        this.nf = kernel.fieldCount();
+        int nf = kernel.fieldCount();
         if (nf < 1) {
             throw new IllegalArgumentException("kernel must have >= 1 field, got " + nf);
         }
-        this.nn = grid.nodeCount();
-        this.left = checkConditions(left, "left", grid.hasCentre());
-        this.right = checkConditions(right, "right", false);
-        this.faceAverage = faceAverage;
-        this.driftScheme = driftScheme;
-        this.index = new int[nn][nf];
-        this.fixed = new double[nn][nf];
-        int count = 0;
+        int nn = grid.nodeCount();
+        BoundaryCondition[] l = checkConditions(left, "left", grid.hasCentre(), nf, grid);
+        BoundaryCondition[] r = checkConditions(right, "right", false, nf, grid);
+        double[] fixed = new double[nn * nf];
         for (int i = 0; i < nn; i++) {
             for (int f = 0; f < nf; f++) {
-                BoundaryCondition bc = i == 0 ? this.left[f] : i == nn - 1 ? this.right[f] : null;
-                boolean isFixed = bc instanceof BoundaryCondition.FixedValue;
-                fixed[i][f] = isFixed ? ((BoundaryCondition.FixedValue) bc).value() : Double.NaN;
-                index[i][f] = isFixed ? -1 : count++;
+                BoundaryCondition bc = i == 0 ? l[f] : i == nn - 1 ? r[f] : null;
+                fixed[i * nf + f] = bc instanceof BoundaryCondition.FixedValue fv ? fv.value() : Double.NaN;
             }
         }
-        this.unknowns = count;
-        this.driftVelocity = kernel.hasDrift() ? tabulateDrift() : null;
-        checkInlets();
+        return new Prepared(l, r, fixed);
     }
 
     /** Every inlet needs a drift that enters the body at its end. */
@@ -142,7 +148,8 @@ public final class FiniteVolume1D implements Discretization {
         return node == 0 ? driftVelocity[0][f] : -driftVelocity[nn - 1][f];
     }
 
-    private BoundaryCondition[] checkConditions(BoundaryCondition[] bcs, String side, boolean centre) {
+    private static BoundaryCondition[] checkConditions(BoundaryCondition[] bcs, String side, boolean centre, int nf,
+                                                       Grid1D grid) {
         if (bcs == null && centre) {
             return new BoundaryCondition[nf];
         }
@@ -185,9 +192,6 @@ public final class FiniteVolume1D implements Discretization {
 
     // ------------------------------------------------------------------ layout
 
-    @Override public int unknowns() { return unknowns; }
-    @Override public int nodes() { return nn; }
-    @Override public int fieldCount() { return nf; }
     @Override public int dimension() { return 1; }
 
     @Override
@@ -196,11 +200,6 @@ public final class FiniteVolume1D implements Discretization {
             throw new IllegalArgumentException("direction must be 0 on a 1D grid, got " + dir);
         }
         return grid.x(node);
-    }
-
-    @Override
-    public int unknownIndex(int field, int node) {
-        return index[node][field];
     }
 
     /** The grid. */
@@ -233,8 +232,8 @@ public final class FiniteVolume1D implements Discretization {
     @Override
     public DMatrixSparseCSC jacobian(double[] u) {
         checkLength(u, "u");
-        DMatrixSparseTriplet t = new DMatrixSparseTriplet(unknowns, unknowns, 3 * unknowns * (nf + 2));
-        assemble(u, new Sink(new double[unknowns], t));
+        DMatrixSparseTriplet t = new DMatrixSparseTriplet(unknowns(), unknowns(), 3 * unknowns() * (nf + 2));
+        assemble(u, new Sink(new double[unknowns()], t));
         DMatrixSparseCSC j = DConvertMatrixStruct.convert(t, (DMatrixSparseCSC) null);
         j.sortIndices(null);
         CommonOps_DSCC.duplicatesAdd(j, null);
@@ -243,11 +242,11 @@ public final class FiniteVolume1D implements Discretization {
 
     @Override
     public DMatrixSparseCSC mass() {
-        DMatrixSparseCSC m = new DMatrixSparseCSC(unknowns, unknowns, unknowns);
+        DMatrixSparseCSC m = new DMatrixSparseCSC(unknowns(), unknowns(), unknowns());
         for (int i = 0; i < nn; i++) {
             for (int f = 0; f < nf; f++) {
-                if (index[i][f] >= 0) {
-                    m.set(index[i][f], index[i][f], grid.weight(i));
+                if (index[i * nf + f] >= 0) {
+                    m.set(index[i * nf + f], index[i * nf + f], grid.weight(i));
                 }
             }
         }
@@ -258,51 +257,6 @@ public final class FiniteVolume1D implements Discretization {
     @Override
     public boolean massIsDiagonal() {
         return true;
-    }
-
-    @Override
-    public double[][] nodalValues(double[] u) {
-        checkLength(u, "u");
-        double[][] out = new double[nf][nn];
-        for (int i = 0; i < nn; i++) {
-            for (int f = 0; f < nf; f++) {
-                out[f][i] = index[i][f] >= 0 ? u[index[i][f]] : fixed[i][f];
-            }
-        }
-        return out;
-    }
-
-    @Override
-    public double[][] nodalPerturbation(double[] v) {
-        checkLength(v, "v");
-        double[][] out = new double[nf][nn];
-        for (int i = 0; i < nn; i++) {
-            for (int f = 0; f < nf; f++) {
-                out[f][i] = index[i][f] >= 0 ? v[index[i][f]] : 0.0;
-            }
-        }
-        return out;
-    }
-
-    @Override
-    public double[] unknownsFromNodal(double[][] nodal) {
-        if (nodal == null || nodal.length != nf) {
-            throw new IllegalArgumentException("nodal values must have " + nf + " fields, got "
-                    + (nodal == null ? "null" : nodal.length));
-        }
-        double[] u = new double[unknowns];
-        for (int f = 0; f < nf; f++) {
-            if (nodal[f] == null || nodal[f].length != nn) {
-                throw new IllegalArgumentException("nodal values of field " + f + " must have " + nn
-                        + " entries, got " + (nodal[f] == null ? "null" : nodal[f].length));
-            }
-            for (int i = 0; i < nn; i++) {
-                if (index[i][f] >= 0) {
-                    u[index[i][f]] = nodal[f][i];
-                }
-            }
-        }
-        return u;
     }
 
     @Override
@@ -349,12 +303,6 @@ public final class FiniteVolume1D implements Discretization {
         return out;
     }
 
-    private void checkLength(double[] v, String name) {
-        if (v == null || v.length != unknowns) {
-            throw new IllegalArgumentException(name + " must have " + unknowns + " entries, got "
-                    + (v == null ? "null" : v.length));
-        }
-    }
 
     // ------------------------------------------------------------------ assembly
 
@@ -370,7 +318,7 @@ public final class FiniteVolume1D implements Discretization {
         }
 
         void addF(int node, int field, double v) {
-            int r = index[node][field];
+            int r = index[node * nf + field];
             if (r >= 0) {
                 f[r] += v;
             }
@@ -380,8 +328,8 @@ public final class FiniteVolume1D implements Discretization {
             if (t == null) {
                 return;
             }
-            int r = index[rowNode][rowField];
-            int c = index[colNode][colField];
+            int r = index[rowNode * nf + rowField];
+            int c = index[colNode * nf + colField];
             if (r >= 0 && c >= 0) {
                 t.addItem(r, c, v);
             }

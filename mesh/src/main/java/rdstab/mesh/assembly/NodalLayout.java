@@ -3,7 +3,7 @@ package rdstab.mesh.assembly;
 import java.util.Arrays;
 
 /**
- * The field layout shared by the 2D discretizations: n fields at every node, unknowns numbered
+ * The field layout shared by the discretizations (1D finite volumes, 2D grids and triangles): n fields at every node, unknowns numbered
  * node-major (all fields of node 0, then of node 1, …) skipping the (node, field) pairs whose value
  * is fixed. Flat arrays (index[node·n + field]) keep the memory at O(nodes) for 10^6 nodes.
  */
