@@ -79,10 +79,10 @@ jid=$(RDSTAB_JAR="$jar" sbatch --parsable --array=0-3 "$here/scripts/sweep-array
 echo "submitted job array $jid"
 for _ in $(seq 600); do
   scontrol ping 2>/dev/null | grep -q UP || { echo "slurm-sweep-test: slurmctld went down" >&2; exit 1; }
-  squeue -h -j "$jid" 2>/dev/null | grep -q . || break
+  [[ -n "$(squeue -h -j "$jid" 2>/dev/null)" ]] || break
   sleep 0.5
 done
-if squeue -h -j "$jid" 2>/dev/null | grep -q .; then
+if [[ -n "$(squeue -h -j "$jid" 2>/dev/null)" ]]; then
   echo "slurm-sweep-test: job array $jid did not finish in 300 s" >&2; exit 1
 fi
 scontrol show job "$jid" 2>/dev/null | grep -E 'ArrayTaskId|JobState|ExitCode' || true
