@@ -590,7 +590,7 @@ public final class CaseReader {
             int ns = a.containsKey("newton-max-steps") ? a.get("newton-max-steps").integer(1, 10000) : d.newtonMaxSteps();
             double et = a.containsKey("eigen-tolerance") ? a.get("eigen-tolerance").number() : d.eigenTolerance();
             if (et < 0) {
-                throw a.get("eigen-tolerance").error("eigen-tolerance must be >= 0 (0 = machine precision), found " + et);
+                throw a.get("eigen-tolerance").error("eigen-tolerance must be >= 0 (0 = the eigen-solver's default), found " + et);
             }
             double mb = a.containsKey("marginal-band") ? positive(a.get("marginal-band")) : d.marginalBand();
             double rl = a.containsKey("residual-limit") ? positive(a.get("residual-limit")) : d.residualLimit();

@@ -7,13 +7,15 @@ package rdstab.solver.eigen;
  * @param shift        shift σ for shift-invert; NaN = automatic (placed to the right of the spectrum)
  * @param symmetric    true when J is symmetric (the operator is self-adjoint in the M inner product):
  *                     allows Lanczos and Cholesky
- * @param tolerance    ARPACK's relative accuracy for the Ritz values (0 = machine precision)
+ * @param tolerance    relative accuracy of the Ritz residuals; 0 = the solver's default: the unit round-off for
+ *                     Arnoldi (ARPACK), 1e-10 for the symmetric Lanczos, where it already gives the
+ *                     eigenvalues to round-off ({@link ThickRestartLanczos})
  * @param maxRestarts  cap on implicit restarts (ARPACK's iparam[2])
  * @param subspace     Krylov subspace size ncv; 0 = automatic (max(2k+1, 20), at most n)
  */
 public record EigenOptions(int count, double shift, boolean symmetric, double tolerance, int maxRestarts, int subspace) {
 
-    /** Default: machine-precision tolerance, 3000 restarts, automatic shift and subspace. */
+    /** Default: the solver's default tolerance, 3000 restarts, automatic shift and subspace. */
     public static EigenOptions rightmost(int count, boolean symmetric) {
         return new EigenOptions(count, Double.NaN, symmetric, 0.0, 3000, 0);
     }

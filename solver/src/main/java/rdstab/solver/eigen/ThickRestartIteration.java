@@ -1,48 +1,59 @@
 package rdstab.solver.eigen;
 
+import java.util.Arrays;
 import java.util.SplittableRandom;
 import org.ejml.data.DMatrixRMaj;
+import org.ejml.data.DMatrixSparseCSC;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
 import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
-import org.ejml.data.DMatrixSparseCSC;
 import rdstab.solver.error.ConvergenceException;
 import rdstab.solver.linear.SparseFactorization;
 import rdstab.solver.linear.SparseOps;
 
 /**
- * The kernel of {@link ThickRestartLanczos}: thick-restart Lanczos (Wu &amp; Simon 2000) for the largest
- * eigenvalues ν of OP = K⁻¹M, K = σM − J symmetric positive definite, M symmetric positive definite.
- * OP is self-adjoint in the M inner product ⟨x, y⟩ = xᵀMy, so all ν are real; with σ above the
- * spectrum every ν = 1/(σ − λ) is positive.
+ * The kernel of {@link ThickRestartLanczos}: block thick-restart Lanczos (Wu &amp; Simon 2000 for the
+ * thick restart; the block recurrence as in Golub &amp; Underwood 1977) for the largest eigenvalues ν of
+ * OP = K⁻¹M, K = σM − J symmetric positive definite, M symmetric positive definite. OP is self-adjoint in
+ * the M inner product ⟨x, y⟩ = xᵀMy, so all ν are real; with σ above the spectrum every ν = 1/(σ − λ) &gt; 0.
  *
- * <p><b>Relation kept.</b> OP V = V T + β v_{m} e_mᵀ with V = [v_0 … v_{m−1}] M-orthonormal and T
- * symmetric: tridiagonal after a fresh start, an arrow (diagonal of kept Ritz values, last column the
- * couplings β s_{m,i}) followed by a tridiagonal block after a restart. Each Lanczos step applies OP
- * once (one Cholesky solve; M v is stored with v, so one product with M per step) and
- * M-orthogonalises against the whole basis by two passes of classical Gram–Schmidt. A step whose new direction has M-norm below
- * {@link #BREAKDOWN}·‖OP v_j‖_M has found an invariant subspace: its coupling is set to 0 and the basis
- * continues with the next seeded pseudo-random vector orthogonalised against the basis.
+ * <p><b>Why blocks.</b> A Krylov space grown from one vector holds one direction of each multiple
+ * eigenvalue; the second copy of a double eigenvalue (the (1,2) and (2,1) modes of a square plate) appears
+ * only through rounding errors, so a single-vector iteration stopped at a moderate tolerance can miss it.
+ * With a block of b vectors every eigenvalue of multiplicity up to b is found in exact arithmetic. The b
+ * solves of a block are done together ({@link SparseFactorization#solve(double[][], double[][], int)}: the
+ * factor streams through memory once for the block).
  *
- * <p><b>Restart.</b> After ncv steps, T = S Θ Sᵀ (EJML's dense symmetric QR). The keep largest Ritz
- * pairs (y_i = V s_i) and v_m form the new basis, keep = nev + min(nconv, (ncv − nev)/2) as in ARPACK's
- * dsaup2 (more kept vectors once some have converged, against stagnation).
+ * <p><b>Relation kept.</b> OP V = V T + W R E_lastᵀ with V = [v_0 … v_{s−1}] M-orthonormal, T symmetric
+ * (block tridiagonal after a fresh start; after a restart a diagonal of kept Ritz values with their
+ * couplings to the next block), W the M-orthonormal block after V and R its b×b coupling to the last block
+ * of V. Each block step applies OP to b vectors (one multi-right-hand-side Cholesky solve; M v is stored
+ * with v, or is v itself when M = I), M-orthogonalises the results against the whole basis by two passes of
+ * classical Gram–Schmidt, then against each other (modified Gram–Schmidt, twice), which gives the next
+ * block and its R. A column whose remainder has M-norm below {@link #BREAKDOWN} of its size before has
+ * found an invariant subspace: its coupling is set to 0 and a seeded pseudo-random vector, orthogonalised
+ * against everything, takes its place.
  *
- * <p><b>Convergence.</b> Ritz pair i is converged when ‖OP y_i − θ_i y_i‖_M = |β s_{m,i}| ≤ tol·θ_i
- * (tol = the requested tolerance, or 2⁻⁵³ when that is 0: ARPACK's criterion without its ε^{2/3}
- * floor, which θ &gt; 0 makes unnecessary). For a self-adjoint operator that residual bounds the
- * distance of θ_i to an eigenvalue of OP and its square over the gap bounds the error.
- * The iteration stops when the nev largest Ritz values are all converged or after maxRestarts restarts.
+ * <p><b>Restart.</b> With T = S Θ Sᵀ (EJML's dense symmetric QR) the keep largest Ritz vectors y_i = V s_i
+ * and W form the new basis, keep = nev + min(nconv, (s − nev)/2) as in ARPACK's dsaup2 (more kept vectors
+ * once some have converged), adjusted so that the blocks fill the basis.
  *
- * <p>One instance per solve; nothing static is mutable, so solves in different threads do not
- * interact. The start vector and the breakdown replacements come from a {@link SplittableRandom}
- * with a fixed seed: the result is a deterministic function of the inputs.
+ * <p><b>Convergence.</b> Ritz pair i is converged when ‖OP y_i − θ_i y_i‖_M = ‖R s_i,last‖₂ ≤ tol·θ_i, the
+ * first {@code wanted} with the requested tolerance (2⁻⁵³ when that is 0), the rest (guards) with
+ * {@link #GUARD_TOLERANCE} at most. For a self-adjoint operator that residual bounds the distance of θ_i to
+ * an eigenvalue of OP, and its square over the gap to the rest of the spectrum bounds the error.
+ *
+ * <p>One instance per solve; nothing static is mutable, so solves in different threads do not interact.
+ * The start block and the breakdown replacements come from a {@link SplittableRandom} with a fixed seed: the
+ * result is a deterministic function of the inputs.
  */
 final class ThickRestartIteration {
 
-    /** Seed of the start vector (any fixed value; this one is a date). */
+    /** Seed of the start block (any fixed value; this one is a date). */
     static final long SEED = 20240611L;
-    /** Relative M-norm below which a new Lanczos direction counts as rounding noise (invariant subspace). */
+    /** Relative M-norm below which a new direction counts as rounding noise (invariant subspace). */
     static final double BREAKDOWN = 1e-13;
+    /** Residual tolerance of the guard pairs (computed beyond the wanted ones, not returned as results). */
+    static final double GUARD_TOLERANCE = 1e-6;
     /** Default tolerance: the unit round-off 2⁻⁵³, as ARPACK's dlamch('EpsMach'). */
     static final double UNIT_ROUNDOFF = 0x1.0p-53;
 
@@ -59,105 +70,201 @@ final class ThickRestartIteration {
 
     private final SparseFactorization chol;
     private final DMatrixSparseCSC m;
+    /** M = I: the M-products are the vectors themselves (mv[i] is v[i]), no multiplications with M. */
+    private final boolean identity;
     private final int n;
     private final int nev;
+    private final int wanted;
     private final int ncv;
+    private final int block;
     private final int maxRestarts;
     private final double tol;
     private final SplittableRandom random = new SplittableRandom(SEED);
-    private double[][] v;
-    private double[][] mv;
-    private double[][] spare;
-    private double[][] spareM;
+    /** Basis v_0 … v_{ncv−1} followed by the next block (b more vectors). */
+    private final double[][] v;
+    private final double[][] mv;
+    private final double[][] spare;
+    private final double[][] spareM;
     private final double[][] t;
+    /** Coupling of the block after the basis to its last block: W R E_lastᵀ. */
+    private final double[][] r;
     private final double[] coef;
     private final double[] passCoef;
+    private final double[][] rhs;
+    private final double[][] out;
+    /** Coupling of the block being formed to the block it came from (see normaliseBlock). */
+    private final double[][] rNew;
+    /** Σ of the squared basis coefficients removed from each column of the block being formed. */
+    private final double[] removed;
     private long ops;
 
     /**
      * @param chol        Cholesky factors of K = σM − J (used through solve only)
      * @param m           M, not modified
-     * @param nev         number of wanted (largest) Ritz pairs, 1 ≤ nev &lt; ncv
-     * @param ncv         basis size, ncv ≤ n − 1 (one more vector, v_ncv, is kept)
+     * @param nev         number of computed (largest) Ritz pairs, 1 ≤ nev &lt; ncv
+     * @param wanted      the first {@code wanted} of them must meet {@code tolerance}; the others (guards) only
+     *                    {@link #GUARD_TOLERANCE} or {@code tolerance}, whichever is looser
+     * @param ncv         basis size, a multiple of block, nev + 2·block ≤ ncv ≤ n − block
+     * @param block       block size b ≥ 1
      * @param maxRestarts cap on thick restarts
      * @param tolerance   relative tolerance of the Ritz residual (0 = unit round-off)
      */
-    ThickRestartIteration(SparseFactorization chol, DMatrixSparseCSC m, int nev, int ncv, int maxRestarts,
-                          double tolerance) {
+    ThickRestartIteration(SparseFactorization chol, DMatrixSparseCSC m, int nev, int wanted, int ncv, int block,
+                          int maxRestarts, double tolerance) {
         this.chol = chol;
         this.m = m;
         this.n = m.numCols;
-        if (nev < 1 || ncv <= nev || ncv > n - 1) {
-            throw new IllegalArgumentException("need 1 <= nev < ncv <= n - 1, got nev = " + nev + ", ncv = " + ncv
-                    + ", n = " + n);
+        if (nev < 1 || block < 1 || ncv < nev + 2 * block || ncv > n - block || ncv % block != 0) {
+            throw new IllegalArgumentException("need 1 <= nev, nev + 2*block <= ncv <= n - block, ncv a multiple of"
+                    + " block, got nev = " + nev
+                    + ", block = " + block + ", ncv = " + ncv + ", n = " + n);
         }
         this.nev = nev;
+        this.wanted = Math.max(1, Math.min(wanted, nev));
         this.ncv = ncv;
+        this.block = block;
         this.maxRestarts = maxRestarts;
         this.tol = tolerance > 0 ? tolerance : UNIT_ROUNDOFF;
-        this.v = new double[ncv + 1][n];
-        this.mv = new double[ncv + 1][n];
-        this.spare = new double[ncv + 1][];
-        this.spareM = new double[ncv + 1][];
+        this.identity = isIdentity(m);
+        this.v = new double[ncv + block][n];
+        this.mv = identity ? v.clone() : new double[ncv + block][n];
+        this.spare = new double[ncv][];
+        this.spareM = new double[ncv][];
         this.t = new double[ncv][ncv];
-        this.coef = new double[ncv + 1];
-        this.passCoef = new double[ncv + 1];
+        this.r = new double[block][block];
+        this.coef = new double[ncv + block];
+        this.passCoef = new double[ncv + block];
+        this.rhs = new double[block][];
+        this.out = new double[block][];
+        this.rNew = new double[block][block];
+        this.removed = new double[block];
     }
 
-    /** Runs the iteration from the seeded start vector. */
+    /** Runs the iteration from the seeded start block. */
     Result run() {
-        randomUnitVector(0);
+        for (int c = 0; c < block; c++) {
+            randomUnitVector(c);
+        }
         int kept = 0;
         for (int restart = 0; ; restart++) {
-            double beta = extend(kept);
-            Projected p = Projected.of(t, ncv);
+            int size = extend(kept);
+            Projected p = Projected.of(t, size);
             boolean[] conv = new boolean[nev];
             int nconv = 0;
             for (int i = 0; i < nev; i++) {
-                conv[i] = Math.abs(beta * p.s[ncv - 1][i]) <= tol * p.theta[i];
+                double bound = i < wanted ? tol : Math.max(tol, GUARD_TOLERANCE);
+                conv[i] = residual(p, size, i) <= bound * p.theta[i];
                 nconv += conv[i] ? 1 : 0;
             }
             if (nconv == nev || restart >= maxRestarts) {
-                return new Result(java.util.Arrays.copyOf(p.theta, nev), ritzVectors(p, nev), conv, restart, ops);
+                return new Result(Arrays.copyOf(p.theta, nev), ritzVectors(p, size, nev), conv, restart, ops);
             }
-            kept = Math.min(nev + Math.min(nconv, (ncv - nev) / 2), ncv - 1);
-            restartWith(p, kept, beta);
+            kept = Math.min(nev + Math.min(nconv, (size - nev) / 2), ncv - 2 * block);
+            kept += (ncv - kept) % block;
+            restartWith(p, size, kept);
         }
     }
 
-    /** Lanczos steps j = kept … ncv − 1; returns β of the last step (the coupling to v_ncv). */
-    private double extend(int kept) {
-        double beta = 0.0;
-        for (int j = kept; j < ncv; j++) {
-            double[] w = v[j + 1];
-            chol.solve(mv[j], w);
-            ops++;
-            orthogonalise(w, j + 1);
-            double alpha = coef[j];
-            if (!Double.isFinite(alpha)) {
-                throw new ConvergenceException(ConvergenceException.Reason.NOT_FINITE,
-                        "the Lanczos iteration produced a non-finite value (step " + j + ")", (int) ops, Double.NaN);
+    /** ‖OP y_i − θ_i y_i‖_M = ‖R s_i,last‖₂ for the Ritz pair i of the projected matrix of this size. */
+    private double residual(Projected p, int size, int i) {
+        double sum = 0;
+        for (int a = 0; a < block; a++) {
+            double x = 0;
+            for (int c = 0; c < block; c++) {
+                x += r[a][c] * p.s[size - block + c][i];
             }
-            t[j][j] = alpha;
-            SparseOps.multiply(m, w, mv[j + 1]);
-            beta = Math.sqrt(Math.max(0.0, EigenChecks.dot(w, mv[j + 1])));
-            double removed = 0.0;
-            for (int i = 0; i <= j; i++) {
-                removed += coef[i] * coef[i];
+            sum += x * x;
+        }
+        return Math.sqrt(sum);
+    }
+
+    /**
+     * Block steps from the block at {@code start} until the basis is full; returns the basis size s (the
+     * next block, W, is then v[s … s+b−1] with coupling r).
+     */
+    private int extend(int start) {
+        int j = start;
+        while (true) {
+            for (int c = 0; c < block; c++) {
+                rhs[c] = mv[j + c];
+                out[c] = v[j + block + c];
             }
-            double normBefore = Math.sqrt(removed + beta * beta); // ‖OP v_j‖_M by Pythagoras
-            if (beta <= BREAKDOWN * normBefore) {
-                beta = 0.0;
-                randomUnitVector(j + 1);
+            chol.solve(rhs, out, block);
+            ops += block;
+            for (int c = 0; c < block; c++) {
+                double[] w = out[c];
+                orthogonalise(w, j + block);
+                double sq = 0;
+                for (int i = 0; i < j + block; i++) {
+                    sq += coef[i] * coef[i];
+                }
+                removed[c] = sq;
+                for (int a = 0; a < block; a++) {
+                    t[j + a][j + c] = coef[j + a];
+                }
+                if (!Double.isFinite(sq)) {
+                    throw new ConvergenceException(ConvergenceException.Reason.NOT_FINITE,
+                            "the Lanczos iteration produced a non-finite value (step " + (j + c) + ")", (int) ops,
+                            Double.NaN);
+                }
+            }
+            normaliseBlock(j + block);
+            boolean last = j + block == ncv;
+            for (int a = 0; a < block; a++) {
+                for (int c = 0; c < block; c++) {
+                    if (last) {
+                        this.r[a][c] = rNew[a][c];
+                    } else {
+                        t[j + block + a][j + c] = rNew[a][c];
+                        t[j + c][j + block + a] = rNew[a][c];
+                    }
+                }
+            }
+            if (last) {
+                return j + block;
+            }
+            j += block;
+        }
+    }
+
+    /**
+     * M-orthonormalises the block v[at … at+b−1] (already M-orthogonal to v_0 … v_{at−1}) column by column,
+     * filling rNew with the coupling: w_c = Σ_{a ≤ c} q_a rNew[a][c]. A column that vanishes is replaced by a
+     * seeded random direction and gets a zero diagonal coupling.
+     */
+    private void normaliseBlock(int at) {
+        for (int c = 0; c < block; c++) {
+            Arrays.fill(rNew[c], 0, block, 0.0);
+        }
+        for (int c = 0; c < block; c++) {
+            double[] w = v[at + c];
+            double[] mw = mv[at + c];
+            applyM(w, mw);
+            double before = Math.sqrt(Math.max(0.0, EigenChecks.dot(w, mw)));
+            for (int pass = 0; pass < 2; pass++) {
+                for (int a = 0; a < c; a++) {
+                    double h = EigenChecks.dot(w, mv[at + a]);
+                    rNew[a][c] += h;
+                    axpy(-h, v[at + a], w);
+                }
+                if (c > 0) {
+                    applyM(w, mw);
+                }
+            }
+            double norm = Math.sqrt(Math.max(0.0, EigenChecks.dot(w, mw)));
+            double removedSq = removed[c];
+            for (int a = 0; a < c; a++) {
+                removedSq += rNew[a][c] * rNew[a][c];
+            }
+            double sizeBefore = Math.sqrt(removedSq + before * before); // ‖OP v‖_M by Pythagoras
+            if (norm <= BREAKDOWN * sizeBefore || norm == 0.0) {
+                rNew[c][c] = 0.0;
+                randomUnitVector(at + c);
             } else {
-                scale(1.0 / beta, w, mv[j + 1]);
-            }
-            if (j + 1 < ncv) {
-                t[j][j + 1] = beta;
-                t[j + 1][j] = beta;
+                rNew[c][c] = norm;
+                scale(1.0 / norm, w, mw);
             }
         }
-        return beta;
     }
 
     /**
@@ -166,16 +273,35 @@ final class ThickRestartIteration {
      * summed coefficients ⟨x, v_i⟩ land in coef[0..count).
      */
     private void orthogonalise(double[] x, int count) {
-        java.util.Arrays.fill(coef, 0.0);
+        Arrays.fill(coef, 0, count, 0.0);
         for (int pass = 0; pass < 2; pass++) {
+            BasisOps.dots(mv, count, x, passCoef);
             for (int i = 0; i < count; i++) {
-                passCoef[i] = EigenChecks.dot(x, mv[i]);
                 coef[i] += passCoef[i];
             }
-            for (int i = 0; i < count; i++) {
-                axpy(-passCoef[i], v[i], x);
+            BasisOps.subtract(v, count, passCoef, x);
+        }
+    }
+
+    /** out = M x (nothing to do when M = I, where out is x itself). */
+    private void applyM(double[] x, double[] out) {
+        if (!identity) {
+            SparseOps.multiply(m, x, out);
+        }
+    }
+
+    /** True when a is the identity matrix (exactly: n stored entries, all diagonal, all 1). */
+    static boolean isIdentity(DMatrixSparseCSC a) {
+        if (a.numRows != a.numCols || a.nz_length != a.numCols) {
+            return false;
+        }
+        for (int c = 0; c < a.numCols; c++) {
+            int q = a.col_idx[c];
+            if (a.col_idx[c + 1] != q + 1 || a.nz_rows[q] != c || a.nz_values[q] != 1.0) {
+                return false;
             }
         }
+        return true;
     }
 
     /** Fills v[index] with a seeded pseudo-random vector, M-orthogonal to v_0 … v_{index−1}, unit M-norm. */
@@ -187,7 +313,7 @@ final class ThickRestartIteration {
             }
             double raw = Math.sqrt(mNormSquared(x));
             orthogonalise(x, index);
-            SparseOps.multiply(m, x, mv[index]);
+            applyM(x, mv[index]);
             double norm = Math.sqrt(Math.max(0.0, EigenChecks.dot(x, mv[index])));
             if (norm > 1e-8 * raw) {
                 scale(1.0 / norm, x, mv[index]);
@@ -199,23 +325,22 @@ final class ThickRestartIteration {
                 (int) ops, Double.NaN);
     }
 
-    /** New basis [y_0 … y_{kept−1}, v_ncv], T = diag(θ) with the arrow couplings β s_{ncv−1,i}. */
-    private void restartWith(Projected p, int kept, double beta) {
+    /** New basis [y_0 … y_{kept−1}, W], T = diag(θ) with the couplings R s_i,last of W to each y_i. */
+    private void restartWith(Projected p, int size, int kept) {
         for (int i = 0; i < kept; i++) {
-            double[] y = spare[i] == null ? new double[n] : spare[i];
-            double[] my = spareM[i] == null ? new double[n] : spareM[i];
-            java.util.Arrays.fill(y, 0.0);
-            java.util.Arrays.fill(my, 0.0);
-            for (int q = 0; q < ncv; q++) {
-                double s = p.s[q][i];
-                axpy(s, v[q], y);
-                axpy(s, mv[q], my);
+            if (spare[i] == null) {
+                spare[i] = new double[n];
             }
-            spare[i] = y;
-            spareM[i] = my;
+            if (!identity && spareM[i] == null) {
+                spareM[i] = new double[n];
+            }
         }
-        double[] last = v[ncv];
-        double[] lastM = mv[ncv];
+        BasisOps.combine(v, size, p.s, kept, spare);
+        if (identity) {
+            System.arraycopy(spare, 0, spareM, 0, kept);
+        } else {
+            BasisOps.combine(mv, size, p.s, kept, spareM);
+        }
         for (int i = 0; i < kept; i++) {
             double[] y = spare[i];
             double[] my = spareM[i];
@@ -224,29 +349,34 @@ final class ThickRestartIteration {
             v[i] = y;
             mv[i] = my;
         }
-        double[] oldKept = v[kept];
-        double[] oldKeptM = mv[kept];
-        v[kept] = last;
-        mv[kept] = lastM;
-        v[ncv] = oldKept;
-        mv[ncv] = oldKeptM;
+        // Move the block W = v[size … size+b−1] to v[kept …]; the vectors there go to W's old slots.
+        for (int c = 0; c < block; c++) {
+            double[] x = v[kept + c];
+            double[] mx = mv[kept + c];
+            v[kept + c] = v[size + c];
+            mv[kept + c] = mv[size + c];
+            v[size + c] = x;
+            mv[size + c] = mx;
+        }
         for (double[] row : t) {
-            java.util.Arrays.fill(row, 0.0);
+            Arrays.fill(row, 0.0);
         }
         for (int i = 0; i < kept; i++) {
             t[i][i] = p.theta[i];
-            t[i][kept] = beta * p.s[ncv - 1][i];
-            t[kept][i] = t[i][kept];
+            for (int a = 0; a < block; a++) {
+                double x = 0;
+                for (int c = 0; c < block; c++) {
+                    x += r[a][c] * p.s[size - block + c][i];
+                }
+                t[kept + a][i] = x;
+                t[i][kept + a] = x;
+            }
         }
     }
 
-    private double[][] ritzVectors(Projected p, int count) {
+    private double[][] ritzVectors(Projected p, int size, int count) {
         double[][] y = new double[count][n];
-        for (int i = 0; i < count; i++) {
-            for (int q = 0; q < ncv; q++) {
-                axpy(p.s[q][i], v[q], y[i]);
-            }
-        }
+        BasisOps.combine(v, size, p.s, count, y);
         return y;
     }
 
@@ -265,7 +395,11 @@ final class ThickRestartIteration {
     private static void scale(double a, double[] x, double[] y) {
         for (int i = 0; i < x.length; i++) {
             x[i] *= a;
-            y[i] *= a;
+        }
+        if (y != x) {
+            for (int i = 0; i < y.length; i++) {
+                y[i] *= a;
+            }
         }
     }
 
@@ -290,7 +424,7 @@ final class ThickRestartIteration {
                 order[i] = i;
                 values[i] = eig.getEigenvalue(i).real;
             }
-            java.util.Arrays.sort(order, (x, y) -> Double.compare(values[y], values[x]));
+            Arrays.sort(order, (x, y) -> Double.compare(values[y], values[x]));
             double[] theta = new double[size];
             double[][] s = new double[size][size];
             for (int i = 0; i < size; i++) {

@@ -24,15 +24,22 @@ import rdstab.solver.linear.SymbolicAnalysis;
  * the spectrum makes the Cholesky fail; σ is then raised by 1e-6·max(1,|σ|)·2^attempt up to three
  * times, then SINGULAR_SHIFT is thrown.
  *
- * <p><b>Iteration and stopping</b> ({@link ThickRestartIteration}): full reorthogonalization by two
- * passes of classical Gram–Schmidt, thick restart keeping the largest Ritz pairs; nev = k + 2 Ritz pairs
- * are computed (so that a multiple eigenvalue at the edge of the wanted set is not cut) and each must
- * satisfy ‖OP y − θ y‖_M = |β_m s_{m,i}| ≤ tol·θ_i, tol = options.tolerance() or 2⁻⁵³ when that is 0.
- * Basis size ncv = options.subspace() or max(2·nev + 1, 20), at most n − 1. One "restart" is one
- * thick restart; operatorApplications counts Cholesky solves. Restart cap reached with fewer than k of
+ * <p><b>Iteration and stopping</b> ({@link ThickRestartIteration}): block Lanczos with blocks of
+ * {@link #BLOCK} vectors (the two solves of a block share one pass over the factor), full
+ * reorthogonalization by two passes of classical Gram–Schmidt, thick restart keeping the largest Ritz
+ * pairs; nev = k + 2 Ritz pairs are computed (so that a multiple eigenvalue at the edge of the wanted set
+ * is not cut). The k wanted pairs must satisfy ‖OP y − θ y‖_M ≤ tol·θ_i and the two guards 1e-6·θ_i, with
+ * tol = options.tolerance(), or {@link #DEFAULT_TOLERANCE} = 1e-10 when that is 0. That default gives the
+ * eigenvalues to round-off: for a self-adjoint operator a Ritz value with residual r lies within
+ * min(‖r‖, ‖r‖²/gap) of an eigenvalue (Kato–Temple; B. N. Parlett, <i>The Symmetric Eigenvalue
+ * Problem</i>, ch. 10–11, from memory), so 1e-10 is at the unit round-off for any relative gap above 1e-6, and
+ * the vectors are accurate to about 1e-10/gap. On the 2D model problem it needs about 44 solves where
+ * the unit round-off needs about 60 (bench/RESULTS.md). Basis size ncv = options.subspace() or
+ * max(2·nev + 1, 20), made a multiple of the block, at most n − block. One "restart" is one thick restart;
+ * operatorApplications counts Cholesky solves (right-hand sides). Restart cap reached with fewer than k of
  * the wanted pairs converged → one retry with ncv doubled and twice the restarts, then
  * EIGEN_NOT_CONVERGED with the converged count. Deterministic: the only pseudo-random numbers are a
- * fixed-seed sequence (start vector, and a fresh direction when the Krylov space becomes invariant).
+ * fixed-seed sequence (start block, and a fresh direction when the Krylov space becomes invariant).
  *
  * <p><b>Certificate.</b> {@link Spectrum#rightmostCertified()} is true when the {@link SpectrumBounds}
  * are rigorous and σ exceeds their bound on Re λ. Then every eigenvalue satisfies λ &lt; σ, so
@@ -41,10 +48,14 @@ import rdstab.solver.linear.SymbolicAnalysis;
  * never exceeds the i-th largest eigenvalue (Cauchy interlacing) and lies within its residual of an
  * eigenvalue, so all k are the largest ν unless the Krylov space missed an eigenvector direction
  * entirely — the same assumption ARPACK's certificate rests on, made unlikely by the pseudo-random start
- * and by computing k + 2 pairs. A loose tolerance weakens it: the second copy of a double eigenvalue
- * emerges from rounding and is amplified only while the iteration goes on (with tolerance 1e-4 both
- * this class and ARPACK miss the (3,1) mode of a square; with 1e-8 or 0 both find it). The returned set is therefore the k rightmost when σ is above the
- * spectrum and all k converged (non-convergence throws, so a returned result always has all k).
+ * block and by computing k + 2 pairs. A single-vector Krylov space holds one direction of each multiple
+ * eigenvalue, and the second copy emerges only from rounding, so a single-vector iteration stopped early
+ * can miss it (with tolerance 1e-4 both the single-vector version of this class and ARPACK missed the
+ * (3,1) mode of a square; with a basis of 16 and tolerance 1e-10 the single-vector version missed the
+ * second copy of the (1,3)/(3,1) pair of the 256² model problem, the block version did not). A block of two finds
+ * every eigenvalue of multiplicity up to two in exact arithmetic. The returned set is therefore the k
+ * rightmost when σ is above the spectrum and all k converged (non-convergence throws, so a returned result
+ * always has all k).
  *
  * <p>Results go through {@link EigenChecks}: unit M-norm vectors, independent residuals
  * ‖Jx − λMx‖₂/(‖J‖₁‖x‖₂), rightmost first. Small problems (n &lt; {@link ShiftInvertArnoldi#DENSE_BELOW}
@@ -55,6 +66,11 @@ public final class ThickRestartLanczos implements EigenSolver {
 
     /** Name of the method in {@link Spectrum#method()}. */
     public static final String METHOD = "lanczos-java";
+
+    /** Block size of the Lanczos iteration: double eigenvalues (squares, symmetric domains) are found exactly. */
+    static final int BLOCK = 2;
+    /** Residual tolerance used when the options ask for 0 ("the solver's default"); see the class comment. */
+    static final double DEFAULT_TOLERANCE = 1e-10;
 
     private final Ordering ordering;
 
@@ -90,15 +106,14 @@ public final class ThickRestartLanczos implements EigenSolver {
         Shifted shifted = factorShifted(j, m, sigma0);
         long t1 = System.nanoTime();
 
-        int ncv = Math.min(n - 1, Math.max(options.subspace() > 0 ? options.subspace() : Math.max(2 * nev + 1, 20),
-                nev + 1));
-        ThickRestartIteration.Result run = new ThickRestartIteration(shifted.chol, m, nev, ncv, options.maxRestarts(),
-                options.tolerance()).run();
+        int ncv = basisSize(options.subspace() > 0 ? options.subspace() : Math.max(2 * nev + 1, 20), nev, n);
+        ThickRestartIteration.Result run = new ThickRestartIteration(shifted.chol, m, nev, k, ncv, BLOCK,
+                options.maxRestarts(), tolerance(options)).run();
         long ops = run.operatorApplications();
         int restarts = run.restarts();
         if (!leadingConverged(run, nev)) {
-            run = new ThickRestartIteration(shifted.chol, m, nev, Math.min(n - 1, 2 * ncv), 2 * options.maxRestarts(),
-                    options.tolerance()).run();
+            run = new ThickRestartIteration(shifted.chol, m, nev, k, basisSize(2 * ncv, nev, n), BLOCK,
+                    2 * options.maxRestarts(), tolerance(options)).run();
             ops += run.operatorApplications();
             restarts += run.restarts();
         }
@@ -121,6 +136,19 @@ public final class ThickRestartLanczos implements EigenSolver {
         return new Spectrum(pairs, shifted.sigma, k, run.convergedCount(), ops, restarts, certified,
                 bounds.rigorous() ? bounds.imBound() : Double.NaN, METHOD, (t1 - t0) * 1e-9 - shifted.orderingSeconds,
                 (t2 - t1) * 1e-9, shifted.orderingSeconds, shifted.chol.nonZerosOfFactors());
+    }
+
+    /** The residual tolerance: the requested one, or {@link #DEFAULT_TOLERANCE} for 0. */
+    static double tolerance(EigenOptions options) {
+        return options.tolerance() > 0 ? options.tolerance() : DEFAULT_TOLERANCE;
+    }
+
+    /** The requested basis size made a multiple of {@link #BLOCK}, at least nev + 2 blocks, at most n − BLOCK. */
+    static int basisSize(int requested, int nev, int n) {
+        int ncv = Math.max(requested, nev + 2 * BLOCK);
+        ncv += (BLOCK - ncv % BLOCK) % BLOCK;
+        int cap = n - BLOCK - (n - BLOCK) % BLOCK;
+        return Math.min(ncv, cap);
     }
 
     /** True when the first {@code count} Ritz pairs (the largest θ) have all converged. */

@@ -21,6 +21,20 @@ public interface SparseFactorization {
      */
     void solve(double[] b, double[] x);
 
+    /**
+     * Solves A x_i = b_i for i &lt; count. The default solves one after the other; the supernodal factors
+     * override it to stream the factor through memory once for two right-hand sides.
+     *
+     * @param b     right-hand sides (at least count), not modified
+     * @param x     solutions, overwritten (none may alias a right-hand side)
+     * @param count number of systems
+     */
+    default void solve(double[][] b, double[][] x, int count) {
+        for (int i = 0; i < count; i++) {
+            solve(b[i], x[i]);
+        }
+    }
+
     /** Number of stored non-zeros in the factors (L + U, or L), a measure of fill-in. */
     long nonZerosOfFactors();
 }

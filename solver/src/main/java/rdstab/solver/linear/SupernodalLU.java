@@ -36,6 +36,7 @@ final class SupernodalLU implements SparseFactorization {
     private final double[] lower;
     private final double[] upper;
     private final double[] work;
+    private double[] work2;
 
     private SupernodalLU(CholeskySymbolic sym, double[] lower, double[] upper) {
         this.sym = sym;
@@ -284,50 +285,30 @@ final class SupernodalLU implements SparseFactorization {
     /** L y = P b forward (unit diagonal), U z = y backward through the stored Uᵀ panels, x = Pᵀ z. */
     @Override
     public void solve(double[] b, double[] x) {
-        int[] perm = sym.perm;
         double[] y = work;
-        int n = sym.n;
-        for (int k = 0; k < n; k++) {
-            y[k] = b[perm[k]];
+        PanelSolve.permute(sym.perm, b, y);
+        PanelSolve.forward(sym, lower, y, true, 0, sym.supernodes);
+        PanelSolve.backward(sym, upper, y, 0, sym.supernodes);
+        PanelSolve.unpermute(sym.perm, y, x);
+    }
+
+    /** Two right-hand sides per pass over the factor (the panel values are the memory traffic of a solve). */
+    @Override
+    public void solve(double[][] b, double[][] x, int count) {
+        int i = 0;
+        if (count > 1 && work2 == null) {
+            work2 = new double[sym.n];
         }
-        int[] rows = sym.rows;
-        for (int t = 0; t < sym.supernodes; t++) {
-            int f = sym.first[t];
-            int w = sym.first[t + 1] - f;
-            int r0 = sym.rowStart[t];
-            int m = sym.rowStart[t + 1] - r0;
-            int base = (int) sym.valueStart[t];
-            for (int k = 0; k < w; k++) {
-                int ck = base + k * m;
-                double yk = y[f + k];
-                for (int i = k + 1; i < m; i++) {
-                    y[rows[r0 + i]] -= lower[ck + i] * yk;
-                }
-            }
+        for (; i + 1 < count; i += 2) {
+            PanelSolve.permute(sym.perm, b[i], work);
+            PanelSolve.permute(sym.perm, b[i + 1], work2);
+            PanelSolve.forward2(sym, lower, work, work2, true);
+            PanelSolve.backward2(sym, upper, work, work2);
+            PanelSolve.unpermute(sym.perm, work, x[i]);
+            PanelSolve.unpermute(sym.perm, work2, x[i + 1]);
         }
-        for (int t = sym.supernodes - 1; t >= 0; t--) {
-            int f = sym.first[t];
-            int w = sym.first[t + 1] - f;
-            int r0 = sym.rowStart[t];
-            int m = sym.rowStart[t + 1] - r0;
-            int base = (int) sym.valueStart[t];
-            for (int k = w - 1; k >= 0; k--) {
-                int ck = base + k * m;
-                double sum = y[f + k];
-                for (int i = k + 1; i < m; i++) {
-                    sum -= upper[ck + i] * y[rows[r0 + i]];
-                }
-                y[f + k] = sum / upper[ck + k];
-            }
-        }
-        for (int k = 0; k < n; k++) {
-            double vk = y[k];
-            if (!Double.isFinite(vk)) {
-                throw new ConvergenceException(ConvergenceException.Reason.SINGULAR_SHIFT,
-                        "The linear solve produced a non-finite value: the factored matrix is singular or badly scaled.",
-                        -1, Double.NaN);
-            }
-            x[perm[k]] = vk;
+        if (i < count) {
+            solve(b[i], x[i]);
         }
     }
 

@@ -7,7 +7,7 @@ package rdstab.solver.model;
  * @param shift               shift σ for shift-invert, NaN = automatic (default)
  * @param newtonTolerance     Newton stops when the scaled residual ‖M⁻¹F‖∞ ≤ this (default 1e-9)
  * @param newtonMaxSteps      Newton iteration cap (default 60)
- * @param eigenTolerance      ARPACK relative tolerance, 0 = machine precision (default 0)
+ * @param eigenTolerance      relative residual tolerance of the eigen-solver, 0 = its default (default 0)
  * @param marginalBand        |growth rate| at or below this counts as marginal (default 1e-6)
  * @param residualLimit       an eigenpair with residual above this is not reported as converged (default 1e-8)
  * @param driftScheme         "centred" (second order, default) or "upwind" (first order, monotone) for drift terms
