@@ -64,6 +64,18 @@ final class CholeskySymbolic {
         this.nonZeros = nonZeros;
     }
 
+    private volatile TreeSplit split;
+
+    /** The two-thread split of the supernodal tree (computed on first use, then kept with the analysis). */
+    TreeSplit split() {
+        TreeSplit t = split;
+        if (t == null) {
+            t = TreeSplit.of(this);
+            split = t;
+        }
+        return t;
+    }
+
     /** Total length of the value array. */
     long values() {
         return valueStart[supernodes];

@@ -15,13 +15,162 @@ import rdstab.solver.error.ConvergenceException;
  * or combined four columns per sweep of a gathered scratch vector, measured 40–70 % slower at 512²
  * (docs/design-notes.md).
  *
- * <p>Range variants ({@code fromPanel}, {@code toPanel}) solve a contiguous run of panels: in postorder a
- * subtree of the elimination tree is such a run, so disjoint subtrees can be solved by different threads
- * (see {@link SupernodalCholesky#solve}).
+ * <p>The kernels work on a contiguous run of panels: in postorder a subtree of the elimination tree is such
+ * a run, so the two groups of disjoint subtrees of a {@link TreeSplit} are solved by two threads. Forward,
+ * the second group accumulates its contributions to the top rows in a separate vector that is added
+ * afterwards (the only rows both groups write), then the top panels are solved; backward, the top panels
+ * come first and the groups then write disjoint rows. Two right-hand sides can share one pass over the
+ * panels (the panel values are the memory traffic of a solve).
  */
 final class PanelSolve {
 
-    private PanelSolve() {
+    private final CholeskySymbolic s;
+    private final double[] lower;
+    private final double[] upper;
+    private final boolean unitLower;
+    private final TreeSplit split;
+    private final double[] y;
+    private double[] z;
+    private double[] y1;
+    private double[] z1;
+
+    /**
+     * Solver for L U x = b (or L Lᵀ x = b) with the panels of the two triangles.
+     *
+     * @param lower     panels of L (its diagonal is used unless unitLower)
+     * @param upper     panels of Uᵀ, whose diagonal is U's (the same array as lower for a Cholesky factor)
+     * @param unitLower true when L has a unit diagonal (LU)
+     */
+    PanelSolve(CholeskySymbolic s, double[] lower, double[] upper, boolean unitLower) {
+        this.s = s;
+        this.lower = lower;
+        this.upper = upper;
+        this.unitLower = unitLower;
+        this.split = s.split();
+        this.y = new double[s.n];
+    }
+
+    /** x = A⁻¹ b. Not thread-safe (scratch arrays). */
+    void solve(double[] b, double[] x) {
+        permute(s.perm, b, y);
+        forward(y, null);
+        backward(y, null);
+        unpermute(s.perm, y, x);
+    }
+
+    /** x_i = A⁻¹ b_i for i &lt; count, two per pass over the panels. */
+    void solve(double[][] b, double[][] x, int count) {
+        int i = 0;
+        for (; i + 1 < count; i += 2) {
+            if (z == null) {
+                z = new double[s.n];
+            }
+            permute(s.perm, b[i], y);
+            permute(s.perm, b[i + 1], z);
+            forward(y, z);
+            backward(y, z);
+            unpermute(s.perm, y, x[i]);
+            unpermute(s.perm, z, x[i + 1]);
+        }
+        if (i < count) {
+            solve(b[i], x[i]);
+        }
+    }
+
+    /** Forward substitution of one or (z not null) two vectors, the two tree groups in parallel. */
+    private void forward(double[] u, double[] w) {
+        if (split.trivial()) {
+            forwardRange(u, w, 0, s.supernodes);
+            return;
+        }
+        if (y1 == null) {
+            y1 = new double[s.n];
+        }
+        if (w != null && z1 == null) {
+            z1 = new double[s.n];
+        }
+        double[] u1 = y1;
+        double[] w1 = w == null ? null : z1;
+        TreeSplit.both(() -> {
+            for (int[] r : split.group0) {
+                forwardRange(u, w, r[0], r[1]);
+            }
+            return true;
+        }, () -> {
+            for (int[] r : split.group1) {
+                copyColumns(u, u1, r);
+                copyColumns(w, w1, r);
+            }
+            for (int c : split.topColumns) {
+                u1[c] = 0.0;
+                if (w1 != null) {
+                    w1[c] = 0.0;
+                }
+            }
+            for (int[] r : split.group1) {
+                forwardRange(u1, w1, r[0], r[1]);
+            }
+            return true;
+        });
+        for (int[] r : split.group1) {
+            copyColumns(u1, u, r);
+            copyColumns(w1, w, r);
+        }
+        for (int c : split.topColumns) {
+            u[c] += u1[c];
+            if (w != null) {
+                w[c] += w1[c];
+            }
+        }
+        for (int t : split.top) {
+            forwardRange(u, w, t, t + 1);
+        }
+    }
+
+    /** Backward substitution: the top panels first, then the two groups in parallel (they write disjoint rows). */
+    private void backward(double[] u, double[] w) {
+        if (split.trivial()) {
+            backwardRange(u, w, 0, s.supernodes);
+            return;
+        }
+        for (int i = split.top.length - 1; i >= 0; i--) {
+            backwardRange(u, w, split.top[i], split.top[i] + 1);
+        }
+        TreeSplit.both(() -> {
+            for (int[] r : split.group0) {
+                backwardRange(u, w, r[0], r[1]);
+            }
+            return true;
+        }, () -> {
+            for (int[] r : split.group1) {
+                backwardRange(u, w, r[0], r[1]);
+            }
+            return true;
+        });
+    }
+
+    private void forwardRange(double[] u, double[] w, int from, int to) {
+        if (w == null) {
+            forward(s, lower, u, unitLower, from, to);
+        } else {
+            forward2(s, lower, u, w, unitLower, from, to);
+        }
+    }
+
+    private void backwardRange(double[] u, double[] w, int from, int to) {
+        if (w == null) {
+            backward(s, upper, u, from, to);
+        } else {
+            backward2(s, upper, u, w, from, to);
+        }
+    }
+
+    /** to[c] = from[c] for the columns of the panel range r (nothing when from is null). */
+    private void copyColumns(double[] from, double[] to, int[] r) {
+        if (from != null) {
+            int c0 = s.first[r[0]];
+            System.arraycopy(from, c0, to, c0, s.first[r[1]] - c0);
+        }
     }
 
     /**
@@ -74,9 +223,10 @@ final class PanelSolve {
     }
 
     /** {@link #forward} for two vectors at once: each panel value is loaded once for both. */
-    static void forward2(CholeskySymbolic s, double[] v, double[] y, double[] z, boolean unitDiagonal) {
+    static void forward2(CholeskySymbolic s, double[] v, double[] y, double[] z, boolean unitDiagonal, int fromPanel,
+                         int toPanel) {
         int[] rows = s.rows;
-        for (int t = 0; t < s.supernodes; t++) {
+        for (int t = fromPanel; t < toPanel; t++) {
             int f = s.first[t];
             int w = s.first[t + 1] - f;
             int r0 = s.rowStart[t];
@@ -100,9 +250,9 @@ final class PanelSolve {
     }
 
     /** {@link #backward} for two vectors at once. */
-    static void backward2(CholeskySymbolic s, double[] v, double[] y, double[] z) {
+    static void backward2(CholeskySymbolic s, double[] v, double[] y, double[] z, int fromPanel, int toPanel) {
         int[] rows = s.rows;
-        for (int t = s.supernodes - 1; t >= 0; t--) {
+        for (int t = toPanel - 1; t >= fromPanel; t--) {
             int f = s.first[t];
             int w = s.first[t + 1] - f;
             int r0 = s.rowStart[t];

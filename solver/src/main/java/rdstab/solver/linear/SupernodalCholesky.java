@@ -28,13 +28,12 @@ public final class SupernodalCholesky implements SparseFactorization {
 
     private final CholeskySymbolic sym;
     private final double[] values;
-    private final double[] work;
-    private double[] work2;
+    private final PanelSolve solver;
 
     private SupernodalCholesky(CholeskySymbolic sym, double[] values) {
         this.sym = sym;
         this.values = values;
-        this.work = new double[sym.n];
+        this.solver = new PanelSolve(sym, values, values, false);
     }
 
     /**
@@ -58,64 +57,25 @@ public final class SupernodalCholesky implements SparseFactorization {
             }
         }
         double threshold = PermutedFactorization.pivotThreshold(a);
-        new Numeric(sym, v, threshold).run();
+        PanelNumeric.run(sym, () -> new Numeric(sym, v, threshold));
         return new SupernodalCholesky(sym, v);
     }
 
     /** The numeric phase, with its scratch arrays. */
-    private static final class Numeric {
-        private final CholeskySymbolic s;
+    private static final class Numeric extends PanelNumeric {
         private final double[] v;
         private final double threshold;
-        private final int[] map;
-        private final int[] head;
-        private final int[] next;
-        private final int[] ptr;
         private double[] acc = new double[16];
 
         Numeric(CholeskySymbolic s, double[] v, double threshold) {
-            this.s = s;
+            super(s);
             this.v = v;
             this.threshold = threshold;
-            this.map = new int[s.n];
-            this.head = new int[s.supernodes];
-            this.next = new int[s.supernodes];
-            this.ptr = new int[s.supernodes];
-            Arrays.fill(head, -1);
-        }
-
-        void run() {
-            for (int t = 0; t < s.supernodes; t++) {
-                int f = s.first[t];
-                int w = s.first[t + 1] - f;
-                int r0 = s.rowStart[t];
-                int m = s.rowStart[t + 1] - r0;
-                int base = (int) s.valueStart[t];
-                for (int r = 0; r < m; r++) {
-                    map[s.rows[r0 + r]] = r;
-                }
-                int d = head[t];
-                while (d != -1) {
-                    int nextD = next[d];
-                    update(d, t, f + w, base, m);
-                    d = nextD;
-                }
-                factorPanel(base, m, w, f);
-                if (m > w) {
-                    ptr[t] = w;
-                    link(t, s.rows[r0 + w]);
-                }
-            }
-        }
-
-        private void link(int d, int row) {
-            int owner = s.superOf[row];
-            next[d] = head[owner];
-            head[owner] = d;
         }
 
         /** Subtracts supernode d's contribution to the panel of t (columns up to end − 1). */
-        private void update(int d, int t, int end, int base, int m) {
+        @Override
+        void update(int d, int t, int end, int base, int m) {
             int dr0 = s.rowStart[d];
             int md = s.rowStart[d + 1] - dr0;
             int wd = s.first[d + 1] - s.first[d];
@@ -155,7 +115,8 @@ public final class SupernodalCholesky implements SparseFactorization {
         }
 
         /** Dense right-looking Cholesky of the m×w panel (diagonal block and the rows below). */
-        private void factorPanel(int base, int m, int w, int f) {
+        @Override
+        boolean factorPanel(int base, int m, int w, int f) {
             for (int k = 0; k < w; k++) {
                 int ck = base + k * m;
                 double pivot = v[ck + k];
@@ -181,6 +142,7 @@ public final class SupernodalCholesky implements SparseFactorization {
                     }
                 }
             }
+            return true;
         }
     }
 
@@ -191,31 +153,13 @@ public final class SupernodalCholesky implements SparseFactorization {
 
     @Override
     public void solve(double[] b, double[] x) {
-        double[] y = work;
-        PanelSolve.permute(sym.perm, b, y);
-        PanelSolve.forward(sym, values, y, false, 0, sym.supernodes);
-        PanelSolve.backward(sym, values, y, 0, sym.supernodes);
-        PanelSolve.unpermute(sym.perm, y, x);
+        solver.solve(b, x);
     }
 
-    /** Two right-hand sides per pass over the factor (the panel values are the memory traffic of a solve). */
+    /** Two right-hand sides per pass over the factor. */
     @Override
     public void solve(double[][] b, double[][] x, int count) {
-        int i = 0;
-        if (count > 1 && work2 == null) {
-            work2 = new double[sym.n];
-        }
-        for (; i + 1 < count; i += 2) {
-            PanelSolve.permute(sym.perm, b[i], work);
-            PanelSolve.permute(sym.perm, b[i + 1], work2);
-            PanelSolve.forward2(sym, values, work, work2, false);
-            PanelSolve.backward2(sym, values, work, work2);
-            PanelSolve.unpermute(sym.perm, work, x[i]);
-            PanelSolve.unpermute(sym.perm, work2, x[i + 1]);
-        }
-        if (i < count) {
-            solve(b[i], x[i]);
-        }
+        solver.solve(b, x, count);
     }
 
     @Override

@@ -35,14 +35,13 @@ final class SupernodalLU implements SparseFactorization {
     private final CholeskySymbolic sym;
     private final double[] lower;
     private final double[] upper;
-    private final double[] work;
-    private double[] work2;
+    private final PanelSolve solver;
 
     private SupernodalLU(CholeskySymbolic sym, double[] lower, double[] upper) {
         this.sym = sym;
         this.lower = lower;
         this.upper = upper;
-        this.work = new double[sym.n];
+        this.solver = new PanelSolve(sym, lower, upper, true);
     }
 
     /**
@@ -75,7 +74,8 @@ final class SupernodalLU implements SparseFactorization {
                 up[base + k * m + k] = lo[base + k * m + k];
             }
         }
-        if (!new Numeric(sym, lo, up, PermutedFactorization.pivotThreshold(a)).run()) {
+        double threshold = PermutedFactorization.pivotThreshold(a);
+        if (!PanelNumeric.run(sym, () -> new Numeric(sym, lo, up, threshold))) {
             return null;
         }
         SupernodalLU lu = new SupernodalLU(sym, lo, up);
@@ -115,66 +115,23 @@ final class SupernodalLU implements SparseFactorization {
     }
 
     /** The numeric phase, with its scratch arrays (same descendant lists as the Cholesky). */
-    private static final class Numeric {
-        private final CholeskySymbolic s;
+    private static final class Numeric extends PanelNumeric {
         private final double[] lo;
         private final double[] up;
         private final double threshold;
-        private final int[] map;
-        private final int[] head;
-        private final int[] next;
-        private final int[] ptr;
         private double[] accL = new double[16];
         private double[] accU = new double[16];
 
         Numeric(CholeskySymbolic s, double[] lo, double[] up, double threshold) {
-            this.s = s;
+            super(s);
             this.lo = lo;
             this.up = up;
             this.threshold = threshold;
-            this.map = new int[s.n];
-            this.head = new int[s.supernodes];
-            this.next = new int[s.supernodes];
-            this.ptr = new int[s.supernodes];
-            Arrays.fill(head, -1);
-        }
-
-        /** False when a pivot falls to round-off level. */
-        boolean run() {
-            for (int t = 0; t < s.supernodes; t++) {
-                int f = s.first[t];
-                int w = s.first[t + 1] - f;
-                int r0 = s.rowStart[t];
-                int m = s.rowStart[t + 1] - r0;
-                int base = (int) s.valueStart[t];
-                for (int r = 0; r < m; r++) {
-                    map[s.rows[r0 + r]] = r;
-                }
-                int d = head[t];
-                while (d != -1) {
-                    int nextD = next[d];
-                    update(d, t, f + w, base, m);
-                    d = nextD;
-                }
-                if (!factorPanel(base, m, w)) {
-                    return false;
-                }
-                if (m > w) {
-                    ptr[t] = w;
-                    link(t, s.rows[r0 + w]);
-                }
-            }
-            return true;
-        }
-
-        private void link(int d, int row) {
-            int owner = s.superOf[row];
-            next[d] = head[owner];
-            head[owner] = d;
         }
 
         /** Subtracts supernode d's contributions L_d U_d to both panels of t (columns up to end − 1). */
-        private void update(int d, int t, int end, int base, int m) {
+        @Override
+        void update(int d, int t, int end, int base, int m) {
             int dr0 = s.rowStart[d];
             int md = s.rowStart[d + 1] - dr0;
             int wd = s.first[d + 1] - s.first[d];
@@ -217,7 +174,8 @@ final class SupernodalLU implements SparseFactorization {
         }
 
         /** Dense right-looking LU without pivoting of the panel pair; false on a round-off-level pivot. */
-        private boolean factorPanel(int base, int m, int w) {
+        @Override
+        boolean factorPanel(int base, int m, int w, int f) {
             for (int k = 0; k < w; k++) {
                 int ck = base + k * m;
                 double pivot = up[ck + k];
@@ -285,31 +243,13 @@ final class SupernodalLU implements SparseFactorization {
     /** L y = P b forward (unit diagonal), U z = y backward through the stored Uᵀ panels, x = Pᵀ z. */
     @Override
     public void solve(double[] b, double[] x) {
-        double[] y = work;
-        PanelSolve.permute(sym.perm, b, y);
-        PanelSolve.forward(sym, lower, y, true, 0, sym.supernodes);
-        PanelSolve.backward(sym, upper, y, 0, sym.supernodes);
-        PanelSolve.unpermute(sym.perm, y, x);
+        solver.solve(b, x);
     }
 
-    /** Two right-hand sides per pass over the factor (the panel values are the memory traffic of a solve). */
+    /** Two right-hand sides per pass over the factor. */
     @Override
     public void solve(double[][] b, double[][] x, int count) {
-        int i = 0;
-        if (count > 1 && work2 == null) {
-            work2 = new double[sym.n];
-        }
-        for (; i + 1 < count; i += 2) {
-            PanelSolve.permute(sym.perm, b[i], work);
-            PanelSolve.permute(sym.perm, b[i + 1], work2);
-            PanelSolve.forward2(sym, lower, work, work2, true);
-            PanelSolve.backward2(sym, upper, work, work2);
-            PanelSolve.unpermute(sym.perm, work, x[i]);
-            PanelSolve.unpermute(sym.perm, work2, x[i + 1]);
-        }
-        if (i < count) {
-            solve(b[i], x[i]);
-        }
+        solver.solve(b, x, count);
     }
 
     /** Non-zeros of L and U (each counted with the diagonal, as for the pivoted LU), explicit panel zeros excluded. */
