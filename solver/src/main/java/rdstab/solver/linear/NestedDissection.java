@@ -39,6 +39,7 @@ final class NestedDissection {
     private final int[] verts;
     private final int[] mark;
     private final int[] level;
+    /** Breadth-first queue of the thread working on the first half (the second half has its own). */
     private final int[] queue;
 
     private NestedDissection(AdjacencyGraph g, double[][] coords) {
@@ -72,26 +73,38 @@ final class NestedDissection {
         return new NestedDissection(AdjacencyGraph.of(a), coords).run();
     }
 
+    /**
+     * Splits the whole graph once, then orders the two parts in two threads ({@link TreeSplit#both}): they
+     * share no vertex and no edge (only the separator touches both, and it is already numbered), so each
+     * thread reads and writes only its own vertices' entries of verts, mark and level, with its own queue.
+     * The result does not depend on the number of threads.
+     */
     private int[] run() {
+        if (g.n <= LEAF) {
+            return verts.clone();
+        }
+        int[] first = splitOnce(0, g.n, queue);
+        int[] other = new int[g.n];
+        TreeSplit.both(() -> {
+            orderPart(0, first[0], queue);
+            return true;
+        }, () -> {
+            orderPart(first[0], first[1], other);
+            return true;
+        });
+        return verts.clone();
+    }
+
+    /** Orders verts[lo..hi) by recursive splitting (depth first), with the given breadth-first queue. */
+    private void orderPart(int lo0, int hi0, int[] q) {
         Deque<int[]> work = new ArrayDeque<>();
-        if (g.n > 0) {
-            work.push(new int[] {0, g.n});
+        if (hi0 > lo0) {
+            work.push(new int[] {lo0, hi0});
         }
         while (!work.isEmpty()) {
             int[] r = work.pop();
             int lo = r[0];
-            int hi = r[1];
-            if (hi - lo <= LEAF) {
-                continue;
-            }
-            for (int q = lo; q < hi; q++) {
-                mark[verts[q]] = lo;
-            }
-            int[] split = coords == null ? splitByLevels(lo, hi) : splitByCoordinate(lo, hi);
-            // split = {end of part 1, end of part 2}; the separator occupies [split[1], hi) and is numbered
-            for (int q = split[1]; q < hi; q++) {
-                mark[verts[q]] = PLACED;
-            }
+            int[] split = splitOnce(lo, r[1], q);
             if (split[0] > lo) {
                 work.push(new int[] {lo, split[0]});
             }
@@ -99,11 +112,28 @@ final class NestedDissection {
                 work.push(new int[] {split[0], split[1]});
             }
         }
-        return verts.clone();
+    }
+
+    /**
+     * One split of verts[lo..hi): returns {end of part 1, end of part 2}, the separator occupying
+     * [end of part 2, hi) and marked numbered; a part of at most LEAF vertices is returned as {lo, lo}.
+     */
+    private int[] splitOnce(int lo, int hi, int[] q) {
+        if (hi - lo <= LEAF) {
+            return new int[] {lo, lo};
+        }
+        for (int k = lo; k < hi; k++) {
+            mark[verts[k]] = lo;
+        }
+        int[] split = coords == null ? splitByLevels(lo, hi, q) : splitByCoordinate(lo, hi, q);
+        for (int k = split[1]; k < hi; k++) {
+            mark[verts[k]] = PLACED;
+        }
+        return split;
     }
 
     /** Breadth-first search from root within the part marked lo; fills queue and level; returns the count reached. */
-    private int bfs(int root, int lo) {
+    private int bfs(int root, int lo, int[] queue) {
         int head = 0;
         int tail = 0;
         queue[tail++] = root;
@@ -126,12 +156,12 @@ final class NestedDissection {
         return tail;
     }
 
-    private int[] splitByLevels(int lo, int hi) {
+    private int[] splitByLevels(int lo, int hi, int[] queue) {
         int size = hi - lo;
         int root = verts[lo];
-        int reached = bfs(root, lo);
+        int reached = bfs(root, lo, queue);
         if (reached < size) {
-            return separateComponent(lo, hi, reached);
+            return separateComponent(lo, hi, reached, queue);
         }
         int ecc = -1;
         for (int iter = 0; iter < 6; iter++) {
@@ -147,9 +177,9 @@ final class NestedDissection {
             }
             ecc = farLevel;
             root = far;
-            bfs(root, lo);
+            bfs(root, lo, queue);
         }
-        bfs(root, lo);
+        bfs(root, lo, queue);
         int half = (size + 1) / 2;
         int cut = level[queue[half - 1]];
         boolean thin = level[queue[size - 1]] > cut; // with an empty second part, keep the separator whole
@@ -191,7 +221,7 @@ final class NestedDissection {
         return new int[] {lo + count[0], lo + count[0] + count[1]};
     }
 
-    private int[] separateComponent(int lo, int hi, int reached) {
+    private int[] separateComponent(int lo, int hi, int reached, int[] queue) {
         int size = hi - lo;
         int[] side = new int[size];
         int[] order = new int[size];
@@ -213,7 +243,7 @@ final class NestedDissection {
         return arrange(lo, order, side, size);
     }
 
-    private int[] splitByCoordinate(int lo, int hi) {
+    private int[] splitByCoordinate(int lo, int hi, int[] queue) {
         int size = hi - lo;
         int dir = 0;
         double widest = -1;
@@ -237,7 +267,7 @@ final class NestedDissection {
         Arrays.sort(values);
         double median = values[size / 2];
         if (!(median > values[0])) {
-            return splitByLevels(lo, hi); // all on one coordinate value: no geometric cut possible
+            return splitByLevels(lo, hi, queue); // all on one coordinate value: no geometric cut possible
         }
         double[] c = coords[dir];
         int[] order = Arrays.copyOfRange(verts, lo, hi);
