@@ -88,8 +88,9 @@ final class ThickRestartIteration {
     private final double[][] t;
     /** Coupling of the block after the basis to its last block: W R E_lastᵀ. */
     private final double[][] r;
-    private final double[] coef;
-    private final double[] passCoef;
+    /** coef[c][i]: summed Gram–Schmidt coefficient of the block's column c against basis vector i. */
+    private final double[][] coef;
+    private final double[][] passCoef;
     private final double[][] rhs;
     private final double[][] out;
     /** Coupling of the block being formed to the block it came from (see normaliseBlock). */
@@ -132,8 +133,8 @@ final class ThickRestartIteration {
         this.spareM = new double[ncv][];
         this.t = new double[ncv][ncv];
         this.r = new double[block][block];
-        this.coef = new double[ncv + block];
-        this.passCoef = new double[ncv + block];
+        this.coef = new double[block][ncv + block];
+        this.passCoef = new double[block][ncv + block];
         this.rhs = new double[block][];
         this.out = new double[block][];
         this.rNew = new double[block][block];
@@ -191,16 +192,15 @@ final class ThickRestartIteration {
             }
             chol.solve(rhs, out, block);
             ops += block;
+            orthogonalise(out, block, j + block);
             for (int c = 0; c < block; c++) {
-                double[] w = out[c];
-                orthogonalise(w, j + block);
                 double sq = 0;
                 for (int i = 0; i < j + block; i++) {
-                    sq += coef[i] * coef[i];
+                    sq += coef[c][i] * coef[c][i];
                 }
                 removed[c] = sq;
                 for (int a = 0; a < block; a++) {
-                    t[j + a][j + c] = coef[j + a];
+                    t[j + a][j + c] = coef[c][j + a];
                 }
                 if (!Double.isFinite(sq)) {
                     throw new ConvergenceException(ConvergenceException.Reason.NOT_FINITE,
@@ -268,18 +268,23 @@ final class ThickRestartIteration {
     }
 
     /**
-     * M-orthogonalises x against v_0 … v_{count−1} by two passes of classical Gram–Schmidt ("twice is
-     * enough" unless x is numerically in the span, which the caller's breakdown test catches). The
-     * summed coefficients ⟨x, v_i⟩ land in coef[0..count).
+     * M-orthogonalises x[0 … nx−1] against v_0 … v_{count−1} by two passes of classical Gram–Schmidt
+     * ("twice is enough" unless a vector is numerically in the span, which the caller's breakdown test
+     * catches), all nx vectors in one sweep over the basis. The summed coefficients ⟨x_c, v_i⟩ land in
+     * coef[c][0..count).
      */
-    private void orthogonalise(double[] x, int count) {
-        Arrays.fill(coef, 0, count, 0.0);
+    private void orthogonalise(double[][] x, int nx, int count) {
+        for (int c = 0; c < nx; c++) {
+            Arrays.fill(coef[c], 0, count, 0.0);
+        }
         for (int pass = 0; pass < 2; pass++) {
-            BasisOps.dots(mv, count, x, passCoef);
-            for (int i = 0; i < count; i++) {
-                coef[i] += passCoef[i];
+            BasisOps.dots(mv, count, x, nx, passCoef);
+            for (int c = 0; c < nx; c++) {
+                for (int i = 0; i < count; i++) {
+                    coef[c][i] += passCoef[c][i];
+                }
             }
-            BasisOps.subtract(v, count, passCoef, x);
+            BasisOps.subtract(v, count, passCoef, x, nx);
         }
     }
 
@@ -312,7 +317,7 @@ final class ThickRestartIteration {
                 x[i] = random.nextDouble(-1.0, 1.0);
             }
             double raw = Math.sqrt(mNormSquared(x));
-            orthogonalise(x, index);
+            orthogonalise(new double[][] {x}, 1, index);
             applyM(x, mv[index]);
             double norm = Math.sqrt(Math.max(0.0, EigenChecks.dot(x, mv[index])));
             if (norm > 1e-8 * raw) {

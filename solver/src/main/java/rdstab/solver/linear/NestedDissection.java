@@ -74,7 +74,7 @@ final class NestedDissection {
     }
 
     /**
-     * Splits the whole graph once, then orders the two parts in two threads ({@link TreeSplit#both}): they
+     * Splits the whole graph once, then orders the two parts in two threads ({@link ParallelPair}): they
      * share no vertex and no edge (only the separator touches both, and it is already numbered), so each
      * thread reads and writes only its own vertices' entries of verts, mark and level, with its own queue.
      * The result does not depend on the number of threads.
@@ -85,7 +85,7 @@ final class NestedDissection {
         }
         int[] first = splitOnce(0, g.n, queue);
         int[] other = new int[g.n];
-        TreeSplit.both(() -> {
+        ParallelPair.both(() -> {
             orderPart(0, first[0], queue);
             return true;
         }, () -> {

@@ -47,7 +47,7 @@ abstract class PanelNumeric {
             return main.runRanges(split.group0);
         }
         PanelNumeric other = make.get();
-        boolean[] ok = TreeSplit.both(() -> main.runRanges(split.group0), () -> other.runRanges(split.group1));
+        boolean[] ok = ParallelPair.both(() -> main.runRanges(split.group0), () -> other.runRanges(split.group1));
         if (!ok[0] || !ok[1]) {
             return false;
         }

@@ -91,7 +91,7 @@ final class PanelSolve {
         }
         double[] u1 = y1;
         double[] w1 = w == null ? null : z1;
-        TreeSplit.both(() -> {
+        ParallelPair.both(() -> {
             for (int[] r : split.group0) {
                 forwardRange(u, w, r[0], r[1]);
             }
@@ -136,7 +136,7 @@ final class PanelSolve {
         for (int i = split.top.length - 1; i >= 0; i--) {
             backwardRange(u, w, split.top[i], split.top[i] + 1);
         }
-        TreeSplit.both(() -> {
+        ParallelPair.both(() -> {
             for (int[] r : split.group0) {
                 backwardRange(u, w, r[0], r[1]);
             }

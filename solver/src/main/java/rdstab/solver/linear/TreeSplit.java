@@ -4,10 +4,6 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.PriorityQueue;
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.atomic.AtomicBoolean;
-import java.util.concurrent.CountDownLatch;
-import java.util.function.BooleanSupplier;
 
 /**
  * A split of the supernodal elimination tree into two groups of disjoint subtrees plus the "top" panels
@@ -24,7 +20,7 @@ import java.util.function.BooleanSupplier;
  * <p><b>Same bits on every machine.</b> The split depends only on the symbolic structure, and the
  * arithmetic depends only on the split (the second group's contributions to the top rows are summed apart,
  * then added), never on how many threads run it: with one core both groups run one after the other in
- * the caller and give the identical result.
+ * the caller and give the identical result ({@link ParallelPair}).
  */
 final class TreeSplit {
 
@@ -162,51 +158,5 @@ final class TreeSplit {
             r[i] = new int[] {t - size[t] + 1, t + 1};
         }
         return r;
-    }
-
-    /**
-     * Runs {@code first} in the calling thread and {@code second} in the common fork-join pool when it has a
-     * free worker (otherwise the caller runs it too, after {@code first}); returns both results. An exception
-     * from either is rethrown (the first one's preferred) after both have finished.
-     */
-    static boolean[] both(BooleanSupplier first, BooleanSupplier second) {
-        AtomicBoolean claimed = new AtomicBoolean();
-        CountDownLatch done = new CountDownLatch(1);
-        boolean[] result = new boolean[2];
-        RuntimeException[] failure = new RuntimeException[2];
-        Runnable task = () -> {
-            if (claimed.compareAndSet(false, true)) {
-                try {
-                    result[1] = second.getAsBoolean();
-                } catch (RuntimeException | Error e) {
-                    failure[1] = e instanceof RuntimeException r ? r : new IllegalStateException(e);
-                } finally {
-                    done.countDown();
-                }
-            }
-        };
-        boolean parallel = ForkJoinPool.getCommonPoolParallelism() > 0 && Runtime.getRuntime().availableProcessors() > 1;
-        if (parallel) {
-            ForkJoinPool.commonPool().execute(task);
-        }
-        try {
-            result[0] = first.getAsBoolean();
-        } catch (RuntimeException e) {
-            failure[0] = e;
-        }
-        task.run(); // no-op when a pool worker has claimed it
-        try {
-            done.await();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while waiting for a parallel factorization part", e);
-        }
-        if (failure[0] != null) {
-            throw failure[0];
-        }
-        if (failure[1] != null) {
-            throw failure[1];
-        }
-        return result;
     }
 }

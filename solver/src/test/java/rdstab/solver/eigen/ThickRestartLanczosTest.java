@@ -126,8 +126,9 @@ class ThickRestartLanczosTest {
     void blockIterationKeepsBothCopiesWithASmallBasisAndLooseTolerance() {
         // Same analytic spectrum as above, under the settings where a single-vector Krylov space (one
         // direction per multiple eigenvalue until rounding supplies the second) can stop early: the smallest
-        // basis allowed (k + 2 pairs, two blocks more) and a residual tolerance of 1e-8.
-        int nn = 60;
+        // basis allowed (k + 2 pairs, two blocks more) and a residual tolerance of 1e-8. 190² unknowns: long
+        // enough for the two-thread paths of the factorization, the solves and the basis products.
+        int nn = 190;
         double h = 1.0 / (nn + 1);
         EigenOptions loose = new EigenOptions(6, Double.NaN, true, 1e-8, 3000, 12);
         List<EigenPair> pairs = new ThickRestartLanczos().solve(TestProblems.laplacian2d(nn),
