@@ -51,20 +51,45 @@ public final class Main implements Runnable {
     public static final int IO = 4;
 
     /**
-     * dev.ludovic.netlib logs a warning each time the native ARPACK is not installed and it falls back to
-     * its pure-Java build; that is expected and not the user's concern (both give the same answers).
-     * Held in a static field so the logger configuration is not garbage-collected.
+     * picocli's converters for java.sql and java.time types, which no rdstab option has (MainTest checks): picocli
+     * registers them by reflection in every CommandLine it builds, initializing some twenty JDK classes (the
+     * java.time date formatters among them) in each run. picocli.converters.excludes is picocli's own switch.
      */
-    private static final java.util.logging.Logger NETLIB_LOG = java.util.logging.Logger.getLogger("dev.ludovic.netlib");
+    static final String UNUSED_CONVERTERS = "java\\.(sql|time)\\..*";
 
     static {
-        NETLIB_LOG.setLevel(java.util.logging.Level.SEVERE);
+        // netlib's warning that the native ARPACK is missing stays quiet, without starting java.util.logging
+        // in runs that never log (QuietNetlibLogging)
+        QuietNetlibLogging.install();
+        if (System.getProperty("picocli.converters.excludes") == null) {
+            System.setProperty("picocli.converters.excludes", UNUSED_CONVERTERS);
+        }
     }
 
-    /** The subcommands, in the order 'rdstab --help' lists them. */
-    private static final java.util.List<Class<?>> SUBCOMMANDS = java.util.List.of(CheckCommand.class, SweepCommand.class,
-            CriticalCommand.class, TraceCommand.class, ConvergeCommand.class, SimulateCommand.class, MergeCommand.class,
-            ExportCommand.class, SpectrumCommand.class, CommandLine.HelpCommand.class);
+    /**
+     * The subcommand names, in the order 'rdstab --help' lists them ('help' last); each is the name in its class's
+     * {@code @Command} (MainTest checks). Kept as names so that a run reads the annotation of the one command it
+     * builds only.
+     */
+    static final java.util.List<String> SUBCOMMAND_NAMES = java.util.List.of("check", "sweep", "critical", "trace",
+            "converge", "simulate", "merge", "export", "spectrum", "help");
+
+    /** The command class of a name in {@link #SUBCOMMAND_NAMES}. */
+    static Class<?> subcommand(String name) {
+        switch (name) {
+            case "check": return CheckCommand.class;
+            case "sweep": return SweepCommand.class;
+            case "critical": return CriticalCommand.class;
+            case "trace": return TraceCommand.class;
+            case "converge": return ConvergeCommand.class;
+            case "simulate": return SimulateCommand.class;
+            case "merge": return MergeCommand.class;
+            case "export": return ExportCommand.class;
+            case "spectrum": return SpectrumCommand.class;
+            case "help": return CommandLine.HelpCommand.class;
+            default: throw new IllegalArgumentException("no subcommand " + name);
+        }
+    }
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -113,15 +138,10 @@ public final class Main implements Runnable {
      */
     static CommandLine commandLine(String first) {
         CommandLine cl = new CommandLine(new Main());
-        Class<?> only = null;
-        for (Class<?> c : SUBCOMMANDS) {
-            if (c != CommandLine.HelpCommand.class && c.getAnnotation(Command.class).name().equals(first)) {
-                only = c;
-            }
-        }
-        for (Class<?> c : SUBCOMMANDS) {
-            if (only == null || c == only) {
-                cl.addSubcommand(c);
+        boolean one = !first.equals("help") && SUBCOMMAND_NAMES.contains(first);
+        for (String name : SUBCOMMAND_NAMES) {
+            if (!one || name.equals(first)) {
+                cl.addSubcommand(subcommand(name));
             }
         }
         cl.setCaseInsensitiveEnumValuesAllowed(true);
