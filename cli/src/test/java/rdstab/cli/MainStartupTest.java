@@ -64,16 +64,18 @@ class MainStartupTest {
 
     /**
      * A non-symmetric case goes through netlib's ARPACK, which logs a warning (java.util.logging, straight to
-     * System.err) when the native library is missing. A fresh JVM is needed: the logging configuration is read
-     * once per JVM. Run once more with the configuration class replaced by a missing one, the warning appears,
-     * so the check can fail.
+     * System.err) when its native build cannot be loaded. A fresh JVM is needed: the logging configuration is
+     * read once per JVM. -Dos.arch=none makes netlib's native load fail whether or not libarpack is installed
+     * here. Run once more with the configuration class replaced by a missing one, the warning appears, so the
+     * check can fail.
      */
     @Test
     void netlibFallbackWarningStaysOffStderr() throws Exception {
         Path c = Path.of("..", "cases", "brusselator-turing.yaml").toAbsolutePath().normalize();
-        String quiet = run(List.of(), "check", c.toString());
+        String quiet = run(List.of("-Dos.arch=none"), "check", c.toString());
         assertEquals("", quiet);
-        String loud = run(List.of("-Djava.util.logging.config.class=rdstab.cli.NoSuchClass"), "check", c.toString());
+        String loud = run(List.of("-Dos.arch=none", "-Djava.util.logging.config.class=rdstab.cli.NoSuchClass"),
+                "check", c.toString());
         assertTrue(loud.contains("dev.ludovic.netlib"), "control run shows netlib's warning: " + loud);
     }
 
