@@ -110,14 +110,8 @@ public final class Main implements Runnable {
         CommandLine cl = commandLine(args.length > 0 ? args[0] : "");
         cl.setOut(out);
         cl.setErr(err);
-        cl.setExecutionExceptionHandler((ex, line, parsed) -> handle(ex, line.getErr(), debug));
-        cl.setParameterExceptionHandler((ex, a) -> {
-            PrintWriter e = ex.getCommandLine().getErr();
-            e.println("rdstab: " + ex.getMessage());
-            e.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help' for the options.");
-            e.flush();
-            return BAD_INPUT;
-        });
+        cl.setExecutionExceptionHandler(new ExecutionErrors(debug));
+        cl.setParameterExceptionHandler(new UsageErrors());
         int code = cl.execute(args);
         out.flush();
         err.flush();
@@ -147,6 +141,38 @@ public final class Main implements Runnable {
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpAutoWidth(true);
         return cl;
+    }
+
+    /*
+     * The two handlers are named classes, not lambdas: picocli's interfaces are Java 5 class files, which the
+     * class-data archive cannot hold, and a lambda implementing one is spun at run time (about 4 ms of a short
+     * run) where a named class is only loaded.
+     */
+
+    /** An exception from a command: one line on stderr and the exit status ({@link #handle}). */
+    private static final class ExecutionErrors implements CommandLine.IExecutionExceptionHandler {
+        private final boolean debug;
+
+        ExecutionErrors(boolean debug) {
+            this.debug = debug;
+        }
+
+        @Override
+        public int handleExecutionException(Exception ex, CommandLine line, CommandLine.ParseResult parsed) {
+            return handle(ex, line.getErr(), debug);
+        }
+    }
+
+    /** A usage error: the message and where to find the options, exit status 2. */
+    private static final class UsageErrors implements CommandLine.IParameterExceptionHandler {
+        @Override
+        public int handleParseException(CommandLine.ParameterException ex, String[] args) {
+            PrintWriter e = ex.getCommandLine().getErr();
+            e.println("rdstab: " + ex.getMessage());
+            e.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help' for the options.");
+            e.flush();
+            return BAD_INPUT;
+        }
     }
 
     static int handle(Exception ex, PrintWriter err, boolean debug) {
