@@ -51,20 +51,45 @@ public final class Main implements Runnable {
     public static final int IO = 4;
 
     /**
-     * dev.ludovic.netlib logs a warning each time the native ARPACK is not installed and it falls back to
-     * its pure-Java build; that is expected and not the user's concern (both give the same answers).
-     * Held in a static field so the logger configuration is not garbage-collected.
+     * picocli's converters for java.sql and java.time types, which no rdstab option has (MainTest checks): picocli
+     * registers them by reflection in every CommandLine it builds, initializing some twenty JDK classes (the
+     * java.time date formatters among them) in each run. picocli.converters.excludes is picocli's own switch.
      */
-    private static final java.util.logging.Logger NETLIB_LOG = java.util.logging.Logger.getLogger("dev.ludovic.netlib");
+    static final String UNUSED_CONVERTERS = "java\\.(sql|time)\\..*";
 
     static {
-        NETLIB_LOG.setLevel(java.util.logging.Level.SEVERE);
+        // netlib's warning that the native ARPACK is missing stays quiet, without starting java.util.logging
+        // in runs that never log (QuietNetlibLogging)
+        QuietNetlibLogging.install();
+        if (System.getProperty("picocli.converters.excludes") == null) {
+            System.setProperty("picocli.converters.excludes", UNUSED_CONVERTERS);
+        }
     }
 
-    /** The subcommands, in the order 'rdstab --help' lists them. */
-    private static final java.util.List<Class<?>> SUBCOMMANDS = java.util.List.of(CheckCommand.class, SweepCommand.class,
-            CriticalCommand.class, TraceCommand.class, ConvergeCommand.class, SimulateCommand.class, MergeCommand.class,
-            ExportCommand.class, SpectrumCommand.class, CommandLine.HelpCommand.class);
+    /**
+     * The subcommand names, in the order 'rdstab --help' lists them ('help' last); each is the name in its class's
+     * {@code @Command} (MainTest checks). Kept as names so that a run reads the annotation of the one command it
+     * builds only.
+     */
+    static final java.util.List<String> SUBCOMMAND_NAMES = java.util.List.of("check", "sweep", "critical", "trace",
+            "converge", "simulate", "merge", "export", "spectrum", "help");
+
+    /** The command class of a name in {@link #SUBCOMMAND_NAMES}. */
+    static Class<?> subcommand(String name) {
+        switch (name) {
+            case "check": return CheckCommand.class;
+            case "sweep": return SweepCommand.class;
+            case "critical": return CriticalCommand.class;
+            case "trace": return TraceCommand.class;
+            case "converge": return ConvergeCommand.class;
+            case "simulate": return SimulateCommand.class;
+            case "merge": return MergeCommand.class;
+            case "export": return ExportCommand.class;
+            case "spectrum": return SpectrumCommand.class;
+            case "help": return CommandLine.HelpCommand.class;
+            default: throw new IllegalArgumentException("no subcommand " + name);
+        }
+    }
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -85,14 +110,8 @@ public final class Main implements Runnable {
         CommandLine cl = commandLine(args.length > 0 ? args[0] : "");
         cl.setOut(out);
         cl.setErr(err);
-        cl.setExecutionExceptionHandler((ex, line, parsed) -> handle(ex, line.getErr(), debug));
-        cl.setParameterExceptionHandler((ex, a) -> {
-            PrintWriter e = ex.getCommandLine().getErr();
-            e.println("rdstab: " + ex.getMessage());
-            e.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help' for the options.");
-            e.flush();
-            return BAD_INPUT;
-        });
+        cl.setExecutionExceptionHandler(new ExecutionErrors(debug));
+        cl.setParameterExceptionHandler(new UsageErrors());
         int code = cl.execute(args);
         out.flush();
         err.flush();
@@ -113,20 +132,47 @@ public final class Main implements Runnable {
      */
     static CommandLine commandLine(String first) {
         CommandLine cl = new CommandLine(new Main());
-        Class<?> only = null;
-        for (Class<?> c : SUBCOMMANDS) {
-            if (c != CommandLine.HelpCommand.class && c.getAnnotation(Command.class).name().equals(first)) {
-                only = c;
-            }
-        }
-        for (Class<?> c : SUBCOMMANDS) {
-            if (only == null || c == only) {
-                cl.addSubcommand(c);
+        boolean one = !first.equals("help") && SUBCOMMAND_NAMES.contains(first);
+        for (String name : SUBCOMMAND_NAMES) {
+            if (!one || name.equals(first)) {
+                cl.addSubcommand(subcommand(name));
             }
         }
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpAutoWidth(true);
         return cl;
+    }
+
+    /*
+     * The two handlers are named classes, not lambdas: picocli's interfaces are Java 5 class files, which the
+     * class-data archive cannot hold, and a lambda implementing one is spun at run time (about 4 ms of a short
+     * run) where a named class is only loaded.
+     */
+
+    /** An exception from a command: one line on stderr and the exit status ({@link #handle}). */
+    private static final class ExecutionErrors implements CommandLine.IExecutionExceptionHandler {
+        private final boolean debug;
+
+        ExecutionErrors(boolean debug) {
+            this.debug = debug;
+        }
+
+        @Override
+        public int handleExecutionException(Exception ex, CommandLine line, CommandLine.ParseResult parsed) {
+            return handle(ex, line.getErr(), debug);
+        }
+    }
+
+    /** A usage error: the message and where to find the options, exit status 2. */
+    private static final class UsageErrors implements CommandLine.IParameterExceptionHandler {
+        @Override
+        public int handleParseException(CommandLine.ParameterException ex, String[] args) {
+            PrintWriter e = ex.getCommandLine().getErr();
+            e.println("rdstab: " + ex.getMessage());
+            e.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help' for the options.");
+            e.flush();
+            return BAD_INPUT;
+        }
     }
 
     static int handle(Exception ex, PrintWriter err, boolean debug) {
