@@ -79,19 +79,60 @@ final class BasisOps {
         }
         for (int r0 = from; r0 < to; r0 += BLOCK) {
             int r1 = Math.min(to, r0 + BLOCK);
-            for (int i = 0; i < count; i++) {
-                double[] b = basis[i];
+            int i = 0;
+            // two basis vectors against two x at a time: four independent sums share each load
+            for (; i + 1 < count; i += 2) {
+                double[] b0 = basis[i];
+                double[] b1 = basis[i + 1];
+                int c = 0;
+                for (; c + 1 < nx; c += 2) {
+                    double[] x0 = x[c];
+                    double[] x1 = x[c + 1];
+                    double s00 = 0;
+                    double s01 = 0;
+                    double s10 = 0;
+                    double s11 = 0;
+                    for (int r = r0; r < r1; r++) {
+                        double u = b0[r];
+                        double w = b1[r];
+                        double p = x0[r];
+                        double q = x1[r];
+                        s00 += u * p;
+                        s01 += u * q;
+                        s10 += w * p;
+                        s11 += w * q;
+                    }
+                    out[c][i] += s00;
+                    out[c + 1][i] += s01;
+                    out[c][i + 1] += s10;
+                    out[c + 1][i + 1] += s11;
+                }
+                for (; c < nx; c++) {
+                    double[] x0 = x[c];
+                    double s0 = 0;
+                    double s1 = 0;
+                    for (int r = r0; r < r1; r++) {
+                        double p = x0[r];
+                        s0 += b0[r] * p;
+                        s1 += b1[r] * p;
+                    }
+                    out[c][i] += s0;
+                    out[c][i + 1] += s1;
+                }
+            }
+            for (; i < count; i++) {
+                double[] b0 = basis[i];
                 for (int c = 0; c < nx; c++) {
                     double[] xc = x[c];
                     double s0 = 0;
                     double s1 = 0;
                     int r = r0;
                     for (; r + 1 < r1; r += 2) {
-                        s0 += b[r] * xc[r];
-                        s1 += b[r + 1] * xc[r + 1];
+                        s0 += b0[r] * xc[r];
+                        s1 += b0[r + 1] * xc[r + 1];
                     }
                     if (r < r1) {
-                        s0 += b[r] * xc[r];
+                        s0 += b0[r] * xc[r];
                     }
                     out[c][i] += s0 + s1;
                 }

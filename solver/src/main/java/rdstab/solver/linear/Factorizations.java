@@ -82,6 +82,20 @@ public final class Factorizations {
         return h;
     }
 
+    /**
+     * Cache key. equals and hashCode are written out: a record's generated ones are bootstrapped through
+     * method handles on first use, about 10 % of a short check's start-up.
+     */
     private record Key(long fingerprint, int n, int nnz, boolean spd, Ordering ordering) {
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Key k && k.fingerprint == fingerprint && k.n == n && k.nnz == nnz && k.spd == spd
+                    && java.util.Objects.equals(k.ordering, ordering);
+        }
+
+        @Override
+        public int hashCode() {
+            return (int) (fingerprint ^ (fingerprint >>> 32)) * 31 + n * 17 + nnz + (spd ? 1 : 0) + 7 * java.util.Objects.hashCode(ordering);
+        }
     }
 }
