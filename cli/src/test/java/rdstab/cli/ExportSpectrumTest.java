@@ -220,4 +220,23 @@ class ExportSpectrumTest {
         }
         assertArrayEquals(want, have, 1e-9 * Math.abs(want[5]));
     }
+
+    @Test
+    void toleranceOptionIsUsedAndChecked() throws Exception {
+        // same analytic spectrum as above; a tolerance at the unit round-off still gives it, and a bad one is
+        // a usage error (exit 2) naming the option
+        int nn = 30;
+        Path f = tmp.resolve("lap-tol.mtx");
+        MatrixMarket.write(f, ModelProblems.laplace(nn, 10.0), true, null, false);
+        CliRun r = CliRun.of("spectrum", f.toString(), "--shift", "0", "--symmetric", "--json", "--modes", "1",
+                "--tolerance", "1e-16");
+        assertEquals(0, r.code(), r.err());
+        double h = 1.0 / (nn + 1);
+        double s1 = Math.sin(Math.PI * h / 2);
+        double exact = 10.0 - 8 / (h * h) * s1 * s1;
+        assertEquals(exact, leading(JSON.readTree(r.out()))[0][0], 1e-11 * Math.abs(exact));
+        CliRun bad = CliRun.of("spectrum", f.toString(), "--tolerance", "2");
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().contains("--tolerance"), bad.err());
+    }
 }

@@ -61,6 +61,12 @@ public final class SpectrumCommand implements Callable<Integer> {
             + "lie above the spectrum). Without --shift a symmetric J is detected by itself.")
     boolean symmetric;
 
+    @Option(names = "--tolerance", paramLabel = "T",
+            description = "Relative residual tolerance of the Ritz pairs (default 0: the solver's own, 1e-10 for the "
+                    + "Lanczos path, which already gives the eigenvalues to round-off, and the unit round-off for "
+                    + "Arnoldi). Use it to match another solver's setting.")
+    Double tolerance;
+
     @Option(names = "--json", description = "Print one JSON object with 'leading' as in the result contract, and the timings.")
     boolean json;
 
@@ -86,8 +92,12 @@ public final class SpectrumCommand implements Callable<Integer> {
         if (shift != null && !Double.isFinite(shift)) {
             throw new InputException("command line", "--shift", "a finite number, found " + shift);
         }
+        if (tolerance != null && !(tolerance >= 0 && tolerance < 1)) {
+            throw new InputException("command line", "--tolerance", "a number in [0, 1), found " + tolerance);
+        }
         boolean sym = symmetric || (shift == null && EnergyAnalysis.isSymmetric(j));
-        EigenOptions opts = new EigenOptions(modes, shift == null ? Double.NaN : shift, sym, 0.0, 3000, 0);
+        EigenOptions opts = new EigenOptions(modes, shift == null ? Double.NaN : shift, sym,
+                tolerance == null ? 0.0 : tolerance, 3000, 0);
         Spectrum s = EigenSolvers.solve(j, m, opts);
         double total = (System.nanoTime() - t0) * 1e-9;
         PrintWriter w = spec.commandLine().getOut();
