@@ -1,13 +1,13 @@
 #!/usr/bin/env bash
 # Benchmark beside SciPy: the same Matrix Market files, the same run, eigenvalues checked to 1e-8 relative.
-# Usage: bench/run-scipy-comparison.sh            (SIZES="128 256 512" TWOFIELD=256 STARTS=5 by default)
+# Usage: bench/run-scipy-comparison.sh            (SIZES="128 256 512" TWOFIELD=256 STARTS=21 by default)
 # Writes bench/RESULTS.md (the table and the command that produced it). Not part of 'mvn verify'.
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$here"
 SIZES="${SIZES:-128 256 512}"
 TWOFIELD="${TWOFIELD:-256}"
-STARTS="${STARTS:-5}"
+STARTS="${STARTS:-21}"
 py=/usr/bin/python3
 scipy_eigs="$here/../shared/bench/scipy_eigs.py"
 if ! $py -c "import scipy.sparse.linalg" 2>/dev/null; then
