@@ -3,7 +3,6 @@ package rdstab.solver.linear;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.DMatrixSparseCSC;
 import org.ejml.interfaces.linsol.LinearSolverSparse;
-import rdstab.solver.error.ConvergenceException;
 
 /**
  * Shared solve path: b is permuted into the ordering, the EJML solver runs on A(p, p), the result is
@@ -45,20 +44,8 @@ abstract class PermutedFactorization implements SparseFactorization {
 
     @Override
     public void solve(double[] b, double[] x) {
-        double[] r = rhs.data;
-        for (int i = 0; i < n; i++) {
-            r[i] = b[perm[i]];
-        }
+        PanelSolve.permute(perm, b, rhs.data);
         solver.solve(rhs, sol);
-        double[] s = sol.data;
-        for (int i = 0; i < n; i++) {
-            double v = s[i];
-            if (!Double.isFinite(v)) {
-                throw new ConvergenceException(ConvergenceException.Reason.SINGULAR_SHIFT,
-                        "The linear solve produced a non-finite value: the factored matrix is singular or badly scaled.",
-                        -1, Double.NaN);
-            }
-            x[perm[i]] = v;
-        }
+        PanelSolve.unpermute(perm, sol.data, x);
     }
 }
