@@ -58,11 +58,19 @@ public final class ParallelPair {
             failure[0] = e;
         }
         task.run(); // no-op when a pool worker has claimed it
-        try {
-            done.await();
-        } catch (InterruptedException e) {
+        // wait without giving up: the other half writes into the caller's arrays and takes milliseconds; an
+        // interrupt is kept for the caller to see afterwards (as it would be after the same work in one thread)
+        boolean interrupted = false;
+        while (true) {
+            try {
+                done.await();
+                break;
+            } catch (InterruptedException e) {
+                interrupted = true;
+            }
+        }
+        if (interrupted) {
             Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while waiting for a parallel factorization part", e);
         }
         if (failure[0] != null) {
             throw failure[0];

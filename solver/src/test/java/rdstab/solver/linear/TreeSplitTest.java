@@ -121,6 +121,29 @@ class TreeSplitTest {
         }
     }
 
+    @Test
+    void interruptedCallerStillGetsTheWholeResultAndKeepsTheInterrupt() throws Exception {
+        // the split solve must not return half-done work when its thread is interrupted (sweeps can be
+        // cancelled): same bits as an undisturbed solve, and the interrupt flag still set afterwards
+        DMatrixSparseCSC a = grid(160, 0.0);
+        SparseFactorization f = Factorizations.factor(a, true, Factorizations.defaultOrdering());
+        int n = a.numCols;
+        double[] b = random(n, 4);
+        double[] quiet = new double[n];
+        f.solve(b, quiet);
+        double[] disturbed = new double[n];
+        boolean[] flag = new boolean[1];
+        Thread t = new Thread(() -> {
+            Thread.currentThread().interrupt();
+            f.solve(b, disturbed);
+            flag[0] = Thread.currentThread().isInterrupted();
+        });
+        t.start();
+        t.join();
+        assertArrayEquals(quiet, disturbed, 0.0);
+        assertTrue(flag[0], "interrupt flag kept");
+    }
+
     private static double[] random(int n, long seed) {
         SplittableRandom r = new SplittableRandom(seed);
         double[] b = new double[n];
