@@ -59,8 +59,8 @@ import rdstab.solver.linear.SymbolicAnalysis;
  *
  * <p>Each eigenvalue is reported as the Rayleigh quotient xᵀJx/xᵀMx of its Ritz vector
  * ({@link #rayleighQuotient}). Results go through {@link EigenChecks}: unit M-norm vectors, independent residuals
- * ‖Jx − λMx‖₂/(‖J‖₁‖x‖₂), rightmost first. Small problems (n &lt; {@link ShiftInvertArnoldi#DENSE_BELOW}
- * or nev + 2 &gt; n) go to {@link DenseEigenSolver}. Inputs are not modified. Thread-safe: an instance
+ * ‖Jx − λMx‖₂/(‖J‖₁‖x‖₂), rightmost first. Small problems (n &lt; {@link ShiftInvertArnoldi#DENSE_BELOW},
+ * or n too small for a basis of nev + 2 blocks) go to {@link DenseEigenSolver}. Inputs are not modified. Thread-safe: an instance
  * holds only its (immutable) ordering.
  */
 public final class ThickRestartLanczos implements EigenSolver {
@@ -96,7 +96,7 @@ public final class ThickRestartLanczos implements EigenSolver {
         int n = j.numCols;
         int k = options.count();
         int nev = k + 2;
-        if (n < ShiftInvertArnoldi.DENSE_BELOW || nev + 2 > n) {
+        if (n < ShiftInvertArnoldi.DENSE_BELOW || basisSize(nev + 2 * BLOCK, nev, n) < nev + 2 * BLOCK) {
             return new DenseEigenSolver().solve(j, m, options.symmetric() ? options
                     : new EigenOptions(k, options.shift(), true, options.tolerance(), options.maxRestarts(),
                     options.subspace()));

@@ -142,6 +142,20 @@ class ThickRestartLanczosTest {
     }
 
     @Test
+    void manyModesOfASmallProblemStillSolve() {
+        // 52 of 59 modes: too many for a basis of nev + 2 blocks, so the dense solver answers; the 1D
+        // Laplacian's eigenvalues are known in closed form (TestProblems.laplacian1dEigenvalue)
+        int n = 59;
+        List<EigenPair> pairs = new ThickRestartLanczos().solve(TestProblems.laplacian1d(n, 1.0), TestProblems.identity(n),
+                EigenOptions.rightmost(52, true)).pairs();
+        assertEquals(52, pairs.size());
+        for (int p = 1; p <= 52; p++) {
+            double exact = TestProblems.laplacian1dEigenvalue(p, n, 1.0);
+            assertEquals(exact, pairs.get(p - 1).re(), 1e-9 * Math.abs(exact), "mode " + p);
+        }
+    }
+
+    @Test
     void certifiedWithTheAutomaticShift() {
         int n = 300;
         Spectrum s = solveNew(TestProblems.laplacian1d(n, 1.0), TestProblems.identity(n), 3);
