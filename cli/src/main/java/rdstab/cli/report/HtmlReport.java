@@ -76,8 +76,8 @@ public final class HtmlReport {
         h.append("<div class=\"verdict ").append(word).append("\">\n<p class=\"big\">Verdict: ")
                 .append(word.toUpperCase(Locale.ROOT)).append("</p>\n<p>").append(esc(TextReport.meaning(a.verdict())))
                 .append("</p>\n</div>\n<table>\n");
-        row(h, "growth rate (max Re λ)", TextReport.sig(a.growthRate(), 8) + " per unit time (undecided within ±"
-                + String.format(Locale.ROOT, "%.1e", a.band()) + ")");
+        row(h, "growth rate (max Re λ)", TextReport.sig(a.growthRate(), 8) + " per unit time (|rate| < "
+                + String.format(Locale.ROOT, "%.1e", a.band()) + " would be undecided)");
         if (Double.isFinite(a.eFoldingTime())) {
             row(h, "e-folding time", TextReport.sig(a.eFoldingTime(), 4) + " time units");
         }

@@ -38,7 +38,7 @@ public final class TextReport {
         w.println();
         w.println("VERDICT: " + a.verdict().word().toUpperCase(Locale.ROOT) + " — " + meaning(a.verdict()));
         String per = PhysicalTerms.applies(r) ? "per conduction time" : "per unit time";
-        w.printf(Locale.ROOT, "  growth rate      %s %s (undecided within ±%.1e)%n", sig(a.growthRate(), 8), per, a.band());
+        w.printf(Locale.ROOT, "  growth rate      %s %s (|rate| < %.1e would be undecided)%n", sig(a.growthRate(), 8), per, a.band());
         if (Double.isFinite(a.eFoldingTime())) {
             w.printf(Locale.ROOT, "  e-folding time   %s %s (%s)%n", sig(a.eFoldingTime(), 4),
                     PhysicalTerms.applies(r) ? "conduction times" : "time units",
