@@ -283,13 +283,6 @@ public final class FiniteDifference2D extends NodalLayout {
         return j;
     }
 
-    private void addF(double[] out, int node, int f, double v) {
-        int r = index[node * nf + f];
-        if (r >= 0) {
-            out[r] += v;
-        }
-    }
-
     private void assemble(double[] u, double[] out, DMatrixSparseCSC j) {
         double[] val = flatValues(u);
         Arrays.fill(out, 0.0);
@@ -423,30 +416,8 @@ public final class FiniteDifference2D extends NodalLayout {
         int i = p % nxn;
         int jj = p / nxn;
         int pos = dir == 0 ? i : jj;
-        int last = dir == 0 ? nxn - 1 : nyn - 1;
         int stride = dir == 0 ? 1 : nxn;
-        rdstab.mesh.grid.Grid1D line = dir == 0 ? grid.x() : grid.y();
-        double[] coef = new double[3];
-        if (pos == 0 || pos == last) {
-            double h = pos == 0 ? line.x(1) - line.x(0) : line.x(last) - line.x(last - 1);
-            coef[pos == 0 ? 1 : 0] = -1 / h;
-            coef[pos == 0 ? 2 : 1] = 1 / h;
-        } else if (driftScheme == DriftScheme.CENTRED) {
-            double hm = line.x(pos) - line.x(pos - 1);
-            double hp = line.x(pos + 1) - line.x(pos);
-            double den = hm * hp * (hm + hp);
-            coef[0] = -hp * hp / den;
-            coef[1] = (hp * hp - hm * hm) / den;
-            coef[2] = hm * hm / den;
-        } else if (c > 0) {
-            double hm = line.x(pos) - line.x(pos - 1);
-            coef[0] = -1 / hm;
-            coef[1] = 1 / hm;
-        } else {
-            double hp = line.x(pos + 1) - line.x(pos);
-            coef[1] = -1 / hp;
-            coef[2] = 1 / hp;
-        }
+        double[] coef = driftScheme.weights(dir == 0 ? grid.x() : grid.y(), pos, c);
         double wc = grid.area(i, jj) * c;
         for (int m = 0; m < 3; m++) {
             if (coef[m] == 0.0) {

@@ -483,29 +483,7 @@ public final class FiniteVolume1D extends NodalLayout {
     private void addDrift(int i, int f, double[][] nodal, Sink out) {
         double c = driftVelocity[i][f];
         double wc = grid.weight(i) * c;
-        int lo = Math.max(0, i - 1);
-        int hi = Math.min(nn - 1, i + 1);
-        double[] coef = new double[3]; // weights of nodes i−1, i, i+1
-        if (i == 0 || i == nn - 1) {
-            double h = grid.x(hi) - grid.x(lo);
-            coef[i == 0 ? 1 : 0] = -1 / h;
-            coef[i == 0 ? 2 : 1] = 1 / h;
-        } else if (driftScheme == DriftScheme.CENTRED) {
-            double hm = grid.x(i) - grid.x(i - 1);
-            double hp = grid.x(i + 1) - grid.x(i);
-            double den = hm * hp * (hm + hp);
-            coef[0] = -hp * hp / den;
-            coef[1] = (hp * hp - hm * hm) / den;
-            coef[2] = hm * hm / den;
-        } else if (c > 0) {
-            double hm = grid.x(i) - grid.x(i - 1);
-            coef[0] = -1 / hm;
-            coef[1] = 1 / hm;
-        } else {
-            double hp = grid.x(i + 1) - grid.x(i);
-            coef[1] = -1 / hp;
-            coef[2] = 1 / hp;
-        }
+        double[] coef = driftScheme.weights(grid, i, c); // weights of nodes i−1, i, i+1
         for (int m = 0; m < 3; m++) {
             int node = i - 1 + m;
             if (node < 0 || node >= nn || coef[m] == 0.0) {

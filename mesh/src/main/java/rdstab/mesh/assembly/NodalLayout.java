@@ -121,6 +121,14 @@ public abstract class NodalLayout implements Discretization {
         return u;
     }
 
+    /** out[row of (node, field f)] += v; nothing when that value is fixed (it has no equation). */
+    protected final void addF(double[] out, int node, int f, double v) {
+        int r = index[node * nf + f];
+        if (r >= 0) {
+            out[r] += v;
+        }
+    }
+
     /** Throws when v is not an unknown vector. */
     protected void checkLength(double[] v, String name) {
         if (v == null || v.length != unknowns) {

@@ -58,16 +58,7 @@ public final class P1Triangles extends NodalLayout {
         this.mesh = mesh;
         this.kernel = kernel;
         this.partBc = conditionsByPart(mesh, kernel.fieldCount(), conditions);
-        int m = mesh.triangleCount();
-        int[] a = new int[3 * m];
-        int[] b = new int[3 * m];
-        for (int t = 0; t < m; t++) {
-            for (int k = 0; k < 3; k++) {
-                a[3 * t + k] = mesh.corner(t, k);
-                b[3 * t + k] = mesh.corner(t, (k + 1) % 3);
-            }
-        }
-        int[][] g = BlockSparsity.graph(nn, a, b);
+        int[][] g = mesh.nodeGraph();
         this.jPattern = new BlockSparsity(g[0], g[1], index, nf, unknowns(), true);
         this.mPattern = nf == 1 ? jPattern : new BlockSparsity(g[0], g[1], index, nf, unknowns(), false);
     }
@@ -227,13 +218,6 @@ public final class P1Triangles extends NodalLayout {
         DMatrixSparseCSC j = jPattern.newMatrix();
         assemble(u, new double[unknowns()], j);
         return j;
-    }
-
-    private void addF(double[] out, int node, int f, double v) {
-        int r = index[node * nf + f];
-        if (r >= 0) {
-            out[r] += v;
-        }
     }
 
     private void assemble(double[] u, double[] out, DMatrixSparseCSC j) {

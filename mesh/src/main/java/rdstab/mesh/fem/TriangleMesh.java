@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
+import rdstab.mesh.assembly.BlockSparsity;
 
 /**
  * An immutable, validated mesh of straight-sided triangles in the plane.
@@ -237,6 +238,20 @@ public final class TriangleMesh {
     /** Corner k (0..2) of triangle t. */
     public int corner(int t, int k) {
         return tri[3 * t + k];
+    }
+
+    /** Node graph of the triangle edges in CSR form, self included, sorted: {adjStart, adj} ({@link BlockSparsity#graph}). */
+    public int[][] nodeGraph() {
+        int m = triangleCount();
+        int[] a = new int[3 * m];
+        int[] b = new int[3 * m];
+        for (int t = 0; t < m; t++) {
+            for (int k = 0; k < 3; k++) {
+                a[3 * t + k] = corner(t, k);
+                b[3 * t + k] = corner(t, (k + 1) % 3);
+            }
+        }
+        return BlockSparsity.graph(nodeCount(), a, b);
     }
 
     /** End k (0, 1) of boundary edge e. */

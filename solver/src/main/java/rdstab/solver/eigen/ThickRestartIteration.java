@@ -316,7 +316,8 @@ final class ThickRestartIteration {
             for (int i = 0; i < n; i++) {
                 x[i] = random.nextDouble(-1.0, 1.0);
             }
-            double raw = Math.sqrt(mNormSquared(x));
+            applyM(x, mv[index]);
+            double raw = Math.sqrt(Math.max(0.0, EigenChecks.dot(x, mv[index])));
             orthogonalise(new double[][] {x}, 1, index);
             applyM(x, mv[index]);
             double norm = Math.sqrt(Math.max(0.0, EigenChecks.dot(x, mv[index])));
@@ -383,12 +384,6 @@ final class ThickRestartIteration {
         double[][] y = new double[count][n];
         BasisOps.combine(v, size, p.s, count, y);
         return y;
-    }
-
-    private double mNormSquared(double[] x) {
-        double[] mx = new double[n];
-        SparseOps.multiply(m, x, mx);
-        return Math.max(0.0, EigenChecks.dot(x, mx));
     }
 
     private static void axpy(double a, double[] x, double[] y) {

@@ -17,9 +17,9 @@ abstract class PanelNumeric {
 
     final CholeskySymbolic s;
     final int[] map;
-    final int[] head;
-    final int[] next;
-    final int[] ptr;
+    private final int[] head;
+    private final int[] next;
+    private final int[] ptr;
 
     PanelNumeric(CholeskySymbolic s) {
         this.s = s;
@@ -31,10 +31,10 @@ abstract class PanelNumeric {
     }
 
     /**
-     * Subtracts panel d's contributions to the panel of t (columns up to end − 1), advances ptr[d] and
-     * relinks d at its next row.
+     * Subtracts the contributions of panel d's rows p1 … p2−1 (its rows that are columns of t) to the panel
+     * of t at base (height m). The caller advances d past them and relinks it.
      */
-    abstract void update(int d, int t, int end, int base, int m);
+    abstract void update(int d, int t, int p1, int p2, int base, int m);
 
     /** Dense factorization of the m×w panel at base (first column f); false when refused. */
     abstract boolean factorPanel(int base, int m, int w, int f);
@@ -99,7 +99,18 @@ abstract class PanelNumeric {
         int d = head[t];
         while (d != -1) {
             int nextD = next[d];
-            update(d, t, f + w, base, m);
+            int dr0 = s.rowStart[d];
+            int md = s.rowStart[d + 1] - dr0;
+            int p1 = ptr[d];
+            int p2 = p1;
+            while (p2 < md && s.rows[dr0 + p2] < f + w) {
+                p2++;
+            }
+            update(d, t, p1, p2, base, m);
+            ptr[d] = p2;
+            if (p2 < md) {
+                link(d, s.rows[dr0 + p2]);
+            }
             d = nextD;
         }
         if (!factorPanel(base, m, w, f)) {
@@ -112,7 +123,7 @@ abstract class PanelNumeric {
         return true;
     }
 
-    final void link(int d, int row) {
+    private void link(int d, int row) {
         int owner = s.superOf[row];
         next[d] = head[owner];
         head[owner] = d;

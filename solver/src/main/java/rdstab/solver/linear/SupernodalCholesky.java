@@ -73,18 +73,13 @@ public final class SupernodalCholesky implements SparseFactorization {
             this.threshold = threshold;
         }
 
-        /** Subtracts supernode d's contribution to the panel of t (columns up to end − 1). */
+        /** Subtracts supernode d's contribution (its rows p1 … p2−1) to the panel of t. */
         @Override
-        void update(int d, int t, int end, int base, int m) {
+        void update(int d, int t, int p1, int p2, int base, int m) {
             int dr0 = s.rowStart[d];
             int md = s.rowStart[d + 1] - dr0;
             int wd = s.first[d + 1] - s.first[d];
             int dbase = (int) s.valueStart[d];
-            int p1 = ptr[d];
-            int p2 = p1;
-            while (p2 < md && s.rows[dr0 + p2] < end) {
-                p2++;
-            }
             int len = md - p1;
             if (acc.length < len) {
                 acc = new double[Math.max(len, 2 * acc.length)];
@@ -107,10 +102,6 @@ public final class SupernodalCholesky implements SparseFactorization {
                 for (int i = 0; i < cnt; i++) {
                     v[target + map[s.rows[dr0 + jj + i]]] -= acc[i];
                 }
-            }
-            ptr[d] = p2;
-            if (p2 < md) {
-                link(d, s.rows[dr0 + p2]);
             }
         }
 

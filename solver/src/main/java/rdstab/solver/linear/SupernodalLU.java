@@ -129,18 +129,13 @@ final class SupernodalLU implements SparseFactorization {
             this.threshold = threshold;
         }
 
-        /** Subtracts supernode d's contributions L_d U_d to both panels of t (columns up to end − 1). */
+        /** Subtracts supernode d's contributions L_d U_d (its rows p1 … p2−1) to both panels of t. */
         @Override
-        void update(int d, int t, int end, int base, int m) {
+        void update(int d, int t, int p1, int p2, int base, int m) {
             int dr0 = s.rowStart[d];
             int md = s.rowStart[d + 1] - dr0;
             int wd = s.first[d + 1] - s.first[d];
             int dbase = (int) s.valueStart[d];
-            int p1 = ptr[d];
-            int p2 = p1;
-            while (p2 < md && s.rows[dr0 + p2] < end) {
-                p2++;
-            }
             int len = md - p1;
             if (accL.length < len) {
                 accL = new double[Math.max(len, 2 * accL.length)];
@@ -166,10 +161,6 @@ final class SupernodalLU implements SparseFactorization {
                     lo[at] -= accL[i];
                     up[at] -= accU[i];
                 }
-            }
-            ptr[d] = p2;
-            if (p2 < md) {
-                link(d, s.rows[dr0 + p2]);
             }
         }
 

@@ -4,7 +4,6 @@ import java.util.ArrayDeque;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import rdstab.mesh.assembly.BlockSparsity;
 import rdstab.mesh.assembly.Discretization;
 import rdstab.mesh.assembly.FiniteDifference2D;
 import rdstab.mesh.assembly.PointKernel;
@@ -156,16 +155,7 @@ final class PlaneProblems {
      * from the last node it reached): the envelope width a banded ordering achieves, in nodes.
      */
     static long levelWidth(TriangleMesh mesh) {
-        int m = mesh.triangleCount();
-        int[] a = new int[3 * m];
-        int[] b = new int[3 * m];
-        for (int t = 0; t < m; t++) {
-            for (int k = 0; k < 3; k++) {
-                a[3 * t + k] = mesh.corner(t, k);
-                b[3 * t + k] = mesh.corner(t, (k + 1) % 3);
-            }
-        }
-        int[][] g = BlockSparsity.graph(mesh.nodeCount(), a, b);
+        int[][] g = mesh.nodeGraph();
         int[] far = {0};
         sweep(g, 0, far);
         return sweep(g, far[0], far);
