@@ -18,7 +18,7 @@ if ! ldconfig -p | grep -q 'libarpack.so.2 '; then
   (apt-get update && apt-get install -y libarpack2) || echo "note: libarpack2 not installed; pure-Java ARPACK used" >&2
 fi
 ./rdstab --version >/dev/null                      # builds the jar when sources changed (and records the class-data archive)
-mvn -B -o -q -pl cli test-compile >/dev/null       # the model-problem writer lives in cli's test classes
+mvn -B -o -q -pl cli -am test-compile >/dev/null   # the model-problem writer lives in cli's test classes (-am: solver and mesh from the reactor, not ~/.m2)
 cp="cli/target/test-classes:cli/target/rdstab.jar"
 work="$(mktemp -d)"
 trap 'rm -rf "$work"' EXIT

@@ -54,21 +54,86 @@ public final class EigenChecks {
         return out;
     }
 
-    /** Normalises x to unit M-norm (and fixes the phase so the largest component is real) and computes ρ. */
+    /**
+     * Normalises x to unit M-norm (and fixes the phase so the largest component is real and positive) and
+     * computes ρ. A real pair (im = 0 and no imaginary part in x) skips the products of the zero imaginary
+     * part; its vectorIm is a zero array as for a complex one.
+     */
     static EigenPair check(double re, double im, double[] xr0, double[] xi0, DMatrixSparseCSC j, DMatrixSparseCSC m,
                            double scale) {
         int n = xr0.length;
+        boolean real = im == 0.0 && (xi0 == null || isZero(xi0));
         double[] xr = xr0.clone();
-        double[] xi = xi0 == null ? new double[n] : xi0.clone();
-        int big = 0;
-        double bigAbs = -1;
+        double[] xi = real ? new double[n] : xi0.clone();
+        fixPhase(xr, real ? null : xi);
+        double[] mr = new double[n];
+        SparseOps.multiply(m, xr, mr);
+        double[] mi = new double[n];
+        double mnorm2 = dot(xr, mr);
+        if (!real) {
+            SparseOps.multiply(m, xi, mi);
+            mnorm2 += dot(xi, mi);
+        }
+        double inv = mnorm2 > 0 ? 1.0 / Math.sqrt(mnorm2) : 1.0;
         for (int i = 0; i < n; i++) {
-            double a = Math.hypot(xr[i], xi[i]);
-            if (a > bigAbs) {
-                bigAbs = a;
+            xr[i] *= inv;
+            xi[i] *= inv;
+            mr[i] *= inv;
+            mi[i] *= inv;
+        }
+        double[] jr = new double[n];
+        SparseOps.multiply(j, xr, jr);
+        double res2 = 0.0;
+        double x2 = 0.0;
+        if (real) {
+            for (int i = 0; i < n; i++) {
+                double rr = jr[i] - re * mr[i];
+                res2 += rr * rr;
+                x2 += xr[i] * xr[i];
+            }
+        } else {
+            double[] ji = new double[n];
+            SparseOps.multiply(j, xi, ji);
+            for (int i = 0; i < n; i++) {
+                double rr = jr[i] - (re * mr[i] - im * mi[i]);
+                double ri = ji[i] - (re * mi[i] + im * mr[i]);
+                res2 += rr * rr + ri * ri;
+                x2 += xr[i] * xr[i] + xi[i] * xi[i];
+            }
+        }
+        double denom = scale * Math.sqrt(x2);
+        double residual = denom > 0 ? Math.sqrt(res2) / denom : Math.sqrt(res2);
+        if (!Double.isFinite(re) || !Double.isFinite(im)) {
+            residual = Double.NaN;
+        }
+        return new EigenPair(re, im, xr, xi, residual);
+    }
+
+    /**
+     * Multiplies x = xr + i·xi (xi null: real) by the unit complex number that makes its largest-modulus
+     * component real and positive (the first such component). The moduli are compared squared; one
+     * hypot for the winner.
+     */
+    private static void fixPhase(double[] xr, double[] xi) {
+        int n = xr.length;
+        int big = 0;
+        double bigSq = -1;
+        for (int i = 0; i < n; i++) {
+            double a = xi == null ? xr[i] * xr[i] : xr[i] * xr[i] + xi[i] * xi[i];
+            if (a > bigSq) {
+                bigSq = a;
                 big = i;
             }
         }
+        if (xi == null) {
+            if (xr[big] < 0) {
+                for (int i = 0; i < n; i++) {
+                    xr[i] = -xr[i];
+                }
+            }
+            return;
+        }
+        double bigAbs = Math.hypot(xr[big], xi[big]);
         if (bigAbs > 0) {
             double c = xr[big] / bigAbs;
             double s = -xi[big] / bigAbs;
@@ -80,36 +145,15 @@ public final class EigenChecks {
             }
             xi[big] = 0.0;
         }
-        double[] mr = new double[n];
-        double[] mi = new double[n];
-        SparseOps.multiply(m, xr, mr);
-        SparseOps.multiply(m, xi, mi);
-        double mnorm2 = dot(xr, mr) + dot(xi, mi);
-        double inv = mnorm2 > 0 ? 1.0 / Math.sqrt(mnorm2) : 1.0;
-        for (int i = 0; i < n; i++) {
-            xr[i] *= inv;
-            xi[i] *= inv;
-            mr[i] *= inv;
-            mi[i] *= inv;
+    }
+
+    private static boolean isZero(double[] a) {
+        for (double v : a) {
+            if (v != 0.0) {
+                return false;
+            }
         }
-        double[] jr = new double[n];
-        double[] ji = new double[n];
-        SparseOps.multiply(j, xr, jr);
-        SparseOps.multiply(j, xi, ji);
-        double res2 = 0.0;
-        double x2 = 0.0;
-        for (int i = 0; i < n; i++) {
-            double rr = jr[i] - (re * mr[i] - im * mi[i]);
-            double ri = ji[i] - (re * mi[i] + im * mr[i]);
-            res2 += rr * rr + ri * ri;
-            x2 += xr[i] * xr[i] + xi[i] * xi[i];
-        }
-        double denom = scale * Math.sqrt(x2);
-        double residual = denom > 0 ? Math.sqrt(res2) / denom : Math.sqrt(res2);
-        if (!Double.isFinite(re) || !Double.isFinite(im)) {
-            residual = Double.NaN;
-        }
-        return new EigenPair(re, im, xr, xi, residual);
+        return true;
     }
 
     static double dot(double[] a, double[] b) {

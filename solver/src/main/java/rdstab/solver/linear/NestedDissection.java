@@ -179,7 +179,8 @@ final class NestedDissection {
             root = far;
             bfs(root, lo, queue);
         }
-        bfs(root, lo, queue);
+        // queue and level now hold the level structure of root: every pass of the loop ends with bfs(root),
+        // and the first pass always runs (ecc starts at −1)
         int half = (size + 1) / 2;
         int cut = level[queue[half - 1]];
         boolean thin = level[queue[size - 1]] > cut; // with an empty second part, keep the separator whole
