@@ -75,31 +75,19 @@ public final class EigenChecks {
             mnorm2 += dot(xi, mi);
         }
         double inv = mnorm2 > 0 ? 1.0 / Math.sqrt(mnorm2) : 1.0;
-        for (int i = 0; i < n; i++) {
-            xr[i] *= inv;
-            xi[i] *= inv;
-            mr[i] *= inv;
-            mi[i] *= inv;
-        }
+        scaleAll(inv, xr, xi, mr, mi);
         double[] jr = new double[n];
         SparseOps.multiply(j, xr, jr);
-        double res2 = 0.0;
-        double x2 = 0.0;
+        double res2;
+        double x2;
         if (real) {
-            for (int i = 0; i < n; i++) {
-                double rr = jr[i] - re * mr[i];
-                res2 += rr * rr;
-                x2 += xr[i] * xr[i];
-            }
+            res2 = residualSquared(re, jr, mr);
+            x2 = dot(xr, xr);
         } else {
             double[] ji = new double[n];
             SparseOps.multiply(j, xi, ji);
-            for (int i = 0; i < n; i++) {
-                double rr = jr[i] - (re * mr[i] - im * mi[i]);
-                double ri = ji[i] - (re * mi[i] + im * mr[i]);
-                res2 += rr * rr + ri * ri;
-                x2 += xr[i] * xr[i] + xi[i] * xi[i];
-            }
+            res2 = residualSquared(re, im, jr, ji, mr, mi);
+            x2 = dot(xr, xr) + dot(xi, xi);
         }
         double denom = scale * Math.sqrt(x2);
         double residual = denom > 0 ? Math.sqrt(res2) / denom : Math.sqrt(res2);
@@ -145,6 +133,39 @@ public final class EigenChecks {
             }
             xi[big] = 0.0;
         }
+    }
+
+    // The loops of check are methods of their own: the JIT then compiles each small loop instead of check
+    // whole with everything it inlines (0.14 s of C2 CPU in a one-shot 512² run).
+
+    private static void scaleAll(double a, double[] x, double[] y, double[] u, double[] w) {
+        for (int i = 0; i < x.length; i++) {
+            x[i] *= a;
+            y[i] *= a;
+            u[i] *= a;
+            w[i] *= a;
+        }
+    }
+
+    /** ‖j − re·m‖². */
+    private static double residualSquared(double re, double[] j, double[] m) {
+        double s = 0.0;
+        for (int i = 0; i < j.length; i++) {
+            double r = j[i] - re * m[i];
+            s += r * r;
+        }
+        return s;
+    }
+
+    /** ‖(jr + i·ji) − (re + i·im)(mr + i·mi)‖². */
+    private static double residualSquared(double re, double im, double[] jr, double[] ji, double[] mr, double[] mi) {
+        double s = 0.0;
+        for (int i = 0; i < jr.length; i++) {
+            double rr = jr[i] - (re * mr[i] - im * mi[i]);
+            double ri = ji[i] - (re * mi[i] + im * mr[i]);
+            s += rr * rr + ri * ri;
+        }
+        return s;
     }
 
     private static boolean isZero(double[] a) {
