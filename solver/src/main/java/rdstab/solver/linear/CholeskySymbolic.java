@@ -84,11 +84,10 @@ final class CholeskySymbolic {
     /** Analyses the pattern of A (square, symmetric pattern assumed) under the ordering p0. */
     static CholeskySymbolic analyse(DMatrixSparseCSC a, int[] p0) {
         int n = a.numCols;
-        DMatrixSparseCSC b0 = SparseOps.permuteSymmetric(a, p0);
-        int[] parent0 = etree(b0);
+        int[] parent0 = etree(Pattern.of(a, p0));
         int[] post = postorder(parent0);
         int[] perm = compose(p0, post);
-        DMatrixSparseCSC b = SparseOps.permuteSymmetric(a, perm);
+        Pattern b = Pattern.of(a, perm);
         int[] parent = etree(b);
         int[] count = columnCounts(b, parent);
         long nnz = sum(count);
@@ -146,16 +145,45 @@ final class CholeskySymbolic {
         return rows;
     }
 
+    /**
+     * The pattern of B = A(p, p), column by column, rows in no particular order and no values: all the symbolic
+     * phase reads (the elimination tree, the column counts and the row structures sort what they need). Cheaper
+     * than a permuted copy of A with sorted columns, which was formed twice per analysis before.
+     */
+    record Pattern(int n, int[] colIdx, int[] rows) {
+        static Pattern of(DMatrixSparseCSC a, int[] p) {
+            int n = a.numCols;
+            int[] pinv = new int[n];
+            for (int i = 0; i < n; i++) {
+                pinv[p[i]] = i;
+            }
+            int[] colIdx = new int[n + 1];
+            int[] rows = new int[a.col_idx[n]];
+            int nz = 0;
+            for (int jNew = 0; jNew < n; jNew++) {
+                int jOld = p[jNew];
+                colIdx[jNew] = nz;
+                for (int q = a.col_idx[jOld]; q < a.col_idx[jOld + 1]; q++) {
+                    rows[nz++] = pinv[a.nz_rows[q]];
+                }
+            }
+            colIdx[n] = nz;
+            return new Pattern(n, colIdx, rows);
+        }
+    }
+
     /** Elimination tree of a symmetric pattern (upper triangle read): parent[j] or −1 for a root. */
-    static int[] etree(DMatrixSparseCSC b) {
-        int n = b.numCols;
+    static int[] etree(Pattern b) {
+        int n = b.n();
+        int[] colIdx = b.colIdx();
+        int[] rowsOf = b.rows();
         int[] parent = new int[n];
         int[] ancestor = new int[n];
         for (int k = 0; k < n; k++) {
             parent[k] = -1;
             ancestor[k] = -1;
-            for (int q = b.col_idx[k]; q < b.col_idx[k + 1]; q++) {
-                int i = b.nz_rows[q];
+            for (int q = colIdx[k]; q < colIdx[k + 1]; q++) {
+                int i = rowsOf[q];
                 while (i != -1 && i < k) {
                     int next = ancestor[i];
                     ancestor[i] = k;
@@ -206,16 +234,18 @@ final class CholeskySymbolic {
     }
 
     /** |L(:,j)| including the diagonal, by walking each row subtree (O(|L|) time). */
-    private static int[] columnCounts(DMatrixSparseCSC b, int[] parent) {
-        int n = b.numCols;
+    private static int[] columnCounts(Pattern b, int[] parent) {
+        int n = b.n();
+        int[] colIdx = b.colIdx();
+        int[] rowsOf = b.rows();
         int[] count = new int[n];
         int[] flag = new int[n];
         Arrays.fill(flag, -1);
         for (int i = 0; i < n; i++) {
             flag[i] = i;
             count[i]++;
-            for (int q = b.col_idx[i]; q < b.col_idx[i + 1]; q++) {
-                int k = b.nz_rows[q];
+            for (int q = colIdx[i]; q < colIdx[i + 1]; q++) {
+                int k = rowsOf[q];
                 while (k < i && flag[k] != i) {
                     count[k]++;
                     flag[k] = i;
@@ -274,9 +304,11 @@ final class CholeskySymbolic {
     }
 
     /** Row structure of each supernode: its columns, the rows of B below them, and its child supernodes' rows. */
-    private static int[][] structures(DMatrixSparseCSC b, int[] parent, int[] first, int[] superOf, int[] count) {
+    private static int[][] structures(Pattern b, int[] parent, int[] first, int[] superOf, int[] count) {
         int ns = first.length - 1;
-        int n = b.numCols;
+        int n = b.n();
+        int[] colIdx = b.colIdx();
+        int[] rowsOf = b.rows();
         int[][] struct = new int[ns][];
         int[] headChild = new int[ns];
         int[] nextChild = new int[ns];
@@ -302,8 +334,8 @@ final class CholeskySymbolic {
                 buf[len++] = j;
             }
             for (int j = f; j < l; j++) {
-                for (int q = b.col_idx[j]; q < b.col_idx[j + 1]; q++) {
-                    int i = b.nz_rows[q];
+                for (int q = colIdx[j]; q < colIdx[j + 1]; q++) {
+                    int i = rowsOf[q];
                     if (i >= l && flag[i] != s) {
                         flag[i] = s;
                         buf[len++] = i;
