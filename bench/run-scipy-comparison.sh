@@ -18,6 +18,7 @@ if ! ldconfig -p | grep -q 'libarpack.so.2 '; then
   (apt-get update && apt-get install -y libarpack2) || echo "note: libarpack2 not installed; pure-Java ARPACK used" >&2
 fi
 ./rdstab --version >/dev/null                      # builds the jar when sources changed (and records the class-data archive)
+jar_stamp="$(stat -c %Y cli/target/rdstab.jar)"     # a source edited during the run makes the launcher rebuild mid-run
 mvn -B -o -q -pl cli -am test-compile >/dev/null   # the model-problem writer lives in cli's test classes (-am: solver and mesh from the reactor, not ~/.m2)
 cp="cli/target/test-classes:cli/target/rdstab.jar"
 work="$(mktemp -d)"
@@ -111,3 +112,8 @@ t_py=$(for i in $(seq "$STARTS"); do /usr/bin/time -f "%e" $py -c "import scipy.
   echo "\`/usr/bin/python3 -c \"import scipy.sparse.linalg\"\` ${t_py} s: ratio $(awk -v a="$t_check" -v b="$t_py" 'BEGIN{printf "%.2f", a/b}')."
 } > bench/RESULTS.md
 cat bench/RESULTS.md
+if [[ "$(stat -c %Y cli/target/rdstab.jar)" != "$jar_stamp" ]]; then
+  echo "WARNING: the jar was rebuilt during this run (a source changed): the rows after that point timed the build" \
+       "too and mixed two versions; run the benchmark again without editing." | tee -a bench/RESULTS.md >&2
+  exit 1
+fi
