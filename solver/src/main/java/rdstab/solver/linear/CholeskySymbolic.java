@@ -84,10 +84,11 @@ final class CholeskySymbolic {
     /** Analyses the pattern of A (square, symmetric pattern assumed) under the ordering p0. */
     static CholeskySymbolic analyse(DMatrixSparseCSC a, int[] p0) {
         int n = a.numCols;
-        int[] parent0 = etree(Pattern.of(a, p0));
+        int[] parent0 = etree(Pattern.of(a, p0, SparseOps.inverse(p0)));
         int[] post = postorder(parent0);
         int[] perm = compose(p0, post);
-        Pattern b = Pattern.of(a, perm);
+        int[] pinv = SparseOps.inverse(perm);
+        Pattern b = Pattern.of(a, perm, pinv);
         int[] parent = etree(b);
         int[] count = columnCounts(b, parent);
         long nnz = sum(count);
@@ -98,7 +99,7 @@ final class CholeskySymbolic {
         int[] rowStart = new int[ns + 1];
         long[] valueStart = new long[ns + 1];
         int[] rows = pack(struct, first, rowStart, valueStart);
-        long[] scatter = scatterMap(a, perm, first, rowStart, rows, valueStart, superOf);
+        long[] scatter = scatterMap(a, pinv, first, rowStart, rows, valueStart, superOf);
         return new CholeskySymbolic(n, perm, first, rowStart, rows, valueStart, superOf, scatter, nnz);
     }
 
@@ -151,12 +152,9 @@ final class CholeskySymbolic {
      * than a permuted copy of A with sorted columns, which was formed twice per analysis before.
      */
     record Pattern(int n, int[] colIdx, int[] rows) {
-        static Pattern of(DMatrixSparseCSC a, int[] p) {
+        /** The pattern of A(p, p); pinv is the inverse of p. */
+        static Pattern of(DMatrixSparseCSC a, int[] p, int[] pinv) {
             int n = a.numCols;
-            int[] pinv = new int[n];
-            for (int i = 0; i < n; i++) {
-                pinv[p[i]] = i;
-            }
             int[] colIdx = new int[n + 1];
             int[] rows = new int[a.col_idx[n]];
             int nz = 0;
@@ -357,14 +355,10 @@ final class CholeskySymbolic {
         return struct;
     }
 
-    /** Position of every lower-triangle entry of B = A(perm, perm) in the panel storage. */
-    private static long[] scatterMap(DMatrixSparseCSC a, int[] perm, int[] first, int[] rowStart, int[] rows,
+    /** Position of every lower-triangle entry of B = A(perm, perm) in the panel storage (pinv the inverse of perm). */
+    private static long[] scatterMap(DMatrixSparseCSC a, int[] pinv, int[] first, int[] rowStart, int[] rows,
                                      long[] valueStart, int[] superOf) {
         int n = a.numCols;
-        int[] pinv = new int[n];
-        for (int k = 0; k < n; k++) {
-            pinv[perm[k]] = k;
-        }
         long[] scatter = new long[a.nz_length];
         for (int jOld = 0; jOld < n; jOld++) {
             for (int q = a.col_idx[jOld]; q < a.col_idx[jOld + 1]; q++) {

@@ -70,10 +70,7 @@ public final class SparseOps {
     /** B = A(p, p) with p[new] = old; columns of B have sorted row indices. */
     static DMatrixSparseCSC permuteSymmetric(DMatrixSparseCSC a, int[] p) {
         int n = a.numCols;
-        int[] pinv = new int[n];
-        for (int i = 0; i < n; i++) {
-            pinv[p[i]] = i;
-        }
+        int[] pinv = inverse(p);
         DMatrixSparseCSC b = new DMatrixSparseCSC(n, n, a.nz_length);
         int nz = 0;
         for (int jNew = 0; jNew < n; jNew++) {
@@ -90,6 +87,15 @@ public final class SparseOps {
         b.indicesSorted = false;
         b.sortIndices(null);
         return b;
+    }
+
+    /** The inverse permutation: pinv[p[k]] = k. */
+    static int[] inverse(int[] p) {
+        int[] pinv = new int[p.length];
+        for (int k = 0; k < p.length; k++) {
+            pinv[p[k]] = k;
+        }
+        return pinv;
     }
 
     /** Adjacency lists of the pattern of A + Aᵀ without the diagonal. */

@@ -88,10 +88,7 @@ final class SupernodalLU implements SparseFactorization {
      */
     static long[] targets(DMatrixSparseCSC a, CholeskySymbolic sym) {
         int n = sym.n;
-        int[] pinv = new int[n];
-        for (int k = 0; k < n; k++) {
-            pinv[sym.perm[k]] = k;
-        }
+        int[] pinv = SparseOps.inverse(sym.perm);
         long[] t = new long[a.nz_length];
         for (int jOld = 0; jOld < n; jOld++) {
             for (int q = a.col_idx[jOld]; q < a.col_idx[jOld + 1]; q++) {

@@ -124,10 +124,7 @@ public final class SymbolicAnalysis {
         }
         DMatrixSparseCSC pa = new DMatrixSparseCSC(n, n, a.nz_length);
         int[] pinvCols = new int[n + 1];
-        int[] pinv = new int[n];
-        for (int k = 0; k < n; k++) {
-            pinv[perm[k]] = k;
-        }
+        int[] pinv = SparseOps.inverse(perm);
         for (int j = 0; j < n; j++) {
             pinvCols[pinv[j] + 1] = a.col_idx[j + 1] - a.col_idx[j];
         }
@@ -181,10 +178,7 @@ public final class SymbolicAnalysis {
     /** Destination of every entry of A in A(p, p) with row indices sorted within each column. */
     private static int[] luTargets(DMatrixSparseCSC a, int[] p) {
         int n = a.numCols;
-        int[] pinv = new int[n];
-        for (int k = 0; k < n; k++) {
-            pinv[p[k]] = k;
-        }
+        int[] pinv = SparseOps.inverse(p);
         int[] target = new int[a.nz_length];
         int[] start = new int[n + 1];
         for (int j = 0; j < n; j++) {
