@@ -284,9 +284,14 @@ public final class ShiftInvertArnoldi implements EigenSolver {
                         ArpackSupport.describeIteration("dnaupd", info.val), restarts, Double.NaN);
             }
             boolean[] select = new boolean[ncv];
-            double[] dr = new double[nev + 1];
-            double[] di = new double[nev + 1];
-            double[] z = new double[n * (nev + 1)];
+            // dneupd can return more values than nev + 1, the size its documentation gives for DR, DI and Z: dnaup2
+            // may report more than nev converged (it enlarges nev against stagnation), and the reordering of the Schur
+            // form in this ARPACK version counts the selected values again (arpack-ng issue 465; here an overflow on a
+            // strongly convective operator). As dneupd's own note on that case advises, DR and DI get room for ncv
+            // values and Z shares V (allowed when the Arnoldi basis is not needed afterwards), which has ncv columns.
+            double[] dr = new double[ncv + 1];
+            double[] di = new double[ncv + 1];
+            double[] z = v;
             double[] workev = new double[3 * ncv];
             intW einfo = new intW(0);
             arpack.dneupd(true, "A", select, dr, di, z, n, 0.0, 0.0, workev, "I", n, "LM", new intW(nev), tol.val, resid, ncv, v,

@@ -173,8 +173,12 @@ public final class ShiftInvertLanczos implements EigenSolver {
                         ArpackSupport.describeIteration("dsaupd", info.val), restarts, Double.NaN);
             }
             boolean[] select = new boolean[ncv];
-            double[] d = new double[nev];
-            double[] z = new double[n * nev];
+            // dsaup2 may report more than nev converged (it enlarges nev against stagnation) and dseupd then returns
+            // that many values and vectors, more than the nev its documentation sizes D and Z for (the overflow
+            // ShiftInvertArnoldi met in dneupd): D gets room for all ncv, and Z is V itself, which the documentation
+            // allows when the Lanczos basis is not needed afterwards
+            double[] d = new double[ncv];
+            double[] z = v;
             intW einfo = new intW(0);
             arpack.dseupd(true, "A", select, d, z, n, sigma, "G", n, "LM", new intW(nev), tol.val, resid, ncv, v, n,
                     iparam, ipntr, workd, workl, lworkl, einfo);

@@ -119,6 +119,48 @@ class ShiftInvertSpectrumTest {
     }
 
     @Test
+    void arnoldiMatchesTheConvectionDiffusionEigenvalues() {
+        // non-symmetric, real spectrum known in closed form (TestProblems.convectionDiffusion2dEigenvalue:
+        // tridiagonal Toeplitz eigenvalues, G. D. Smith, from memory); drift 0.1 keeps it well conditioned
+        int nn = 60;
+        double drift = 0.1;
+        double c = -0.01;
+        Spectrum s = new ShiftInvertArnoldi().solve(TestProblems.convectionDiffusion2d(nn, drift, c),
+                TestProblems.identity(nn * nn), EigenOptions.rightmost(6, false));
+        double[] exact = TestProblems.convectionDiffusion2dRightmost(6, nn, drift, c);
+        for (int i = 0; i < 6; i++) {
+            assertEquals(exact[i], s.pairs().get(i).re(), 1e-12, "eigenvalue " + i);
+            assertEquals(0.0, s.pairs().get(i).im(), 1e-12);
+        }
+        assertTrue(s.worstResidual() < 1e-13, "worst residual " + s.worstResidual());
+    }
+
+    @Test
+    void moreConvergedValuesThanRequestedDoNotOverflow() {
+        // strongly convective (drift 0.5 on an 80 x 80 grid, transposed): ARPACK reports more converged Ritz
+        // values than the nev it was asked for, and its post-processing returned more than nev + 1 of them;
+        // sized as documented, the arrays overflowed (ArrayIndexOutOfBoundsException inside dneupd)
+        int nn = 80;
+        double drift = 0.5;
+        double c = -0.01;
+        DMatrixSparseCSC j = org.ejml.sparse.csc.CommonOps_DSCC.transpose(
+                TestProblems.convectionDiffusion2d(nn, drift, c), null, null);
+        for (int k : new int[] {3, 6}) {
+            Spectrum s = new ShiftInvertArnoldi().solve(j, TestProblems.identity(nn * nn), EigenOptions.rightmost(k, false));
+            // at least k (a conjugate pair at the edge is kept whole)
+            assertTrue(s.pairs().size() >= k, "pairs " + s.pairs().size());
+            assertTrue(s.worstResidual() < 1e-13, "worst residual " + s.worstResidual());
+            // the operator is similar to a symmetric one through diag(3^(i/2)), so its eigenvalues have condition
+            // numbers near 3^80: a backward-stable answer (residual 1e-15) may still be 1e-3 off the exact value,
+            // and a close pair may come out as a complex pair with a small imaginary part
+            double[] exact = TestProblems.convectionDiffusion2dRightmost(k, nn, drift, c);
+            for (int i = 0; i < k; i++) {
+                assertEquals(exact[i], s.pairs().get(i).re(), 0.02, "k = " + k + ", eigenvalue " + i);
+            }
+        }
+    }
+
+    @Test
     void smallProblemsFallBackToDense() {
         Spectrum s = new ShiftInvertArnoldi().solve(TestProblems.laplacian1d(30, 1.0), TestProblems.identity(30),
                 EigenOptions.rightmost(2, false));

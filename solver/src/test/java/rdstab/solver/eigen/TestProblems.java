@@ -91,6 +91,63 @@ final class TestProblems {
     }
 
     /**
+     * Convection–diffusion on an N×N grid with central differences and unit spacing: (D_x + D_y + c)
+     * with D_x the tridiagonal Toeplitz (1 + drift, −2, 1 − drift) along x (sub, diag, sup) and D_y the
+     * symmetric (1, −2, 1) along y. Non-symmetric for drift ≠ 0, yet with a real spectrum for |drift| &lt; 1
+     * ({@link #convectionDiffusion2dEigenvalue}).
+     */
+    static DMatrixSparseCSC convectionDiffusion2d(int nn, double drift, double c) {
+        int n = nn * nn;
+        DMatrixSparseTriplet t = new DMatrixSparseTriplet(n, n, 5 * n);
+        for (int iy = 0; iy < nn; iy++) {
+            for (int ix = 0; ix < nn; ix++) {
+                int r = iy * nn + ix;
+                t.addItem(r, r, -4 + c);
+                if (ix > 0) {
+                    t.addItem(r, r - 1, 1 + drift);
+                }
+                if (ix + 1 < nn) {
+                    t.addItem(r, r + 1, 1 - drift);
+                }
+                if (iy > 0) {
+                    t.addItem(r, r - nn, 1);
+                }
+                if (iy + 1 < nn) {
+                    t.addItem(r, r + nn, 1);
+                }
+            }
+        }
+        return csc(t);
+    }
+
+    /**
+     * Eigenvalue (p, q) of {@link #convectionDiffusion2d}: a tridiagonal Toeplitz matrix (b, a, c) of
+     * order N has the eigenvalues a + 2√(bc)·cos(jπ/(N + 1)), j = 1..N (G. D. Smith, <i>Numerical
+     * Solution of Partial Differential Equations</i>, from memory), and a Kronecker sum adds them:
+     * λ = c − 4 + 2√(1 − drift²)·cos(pπ/(N + 1)) + 2cos(qπ/(N + 1)).
+     */
+    static double convectionDiffusion2dEigenvalue(int p, int q, int nn, double drift, double c) {
+        return c - 4 + 2 * Math.sqrt(1 - drift * drift) * Math.cos(p * Math.PI / (nn + 1))
+                + 2 * Math.cos(q * Math.PI / (nn + 1));
+    }
+
+    /** The k largest of {@link #convectionDiffusion2dEigenvalue} over all (p, q), largest first. */
+    static double[] convectionDiffusion2dRightmost(int k, int nn, double drift, double c) {
+        double[] all = new double[nn * nn];
+        for (int p = 1; p <= nn; p++) {
+            for (int q = 1; q <= nn; q++) {
+                all[(p - 1) * nn + q - 1] = convectionDiffusion2dEigenvalue(p, q, nn, drift, c);
+            }
+        }
+        java.util.Arrays.sort(all);
+        double[] out = new double[k];
+        for (int i = 0; i < k; i++) {
+            out[i] = all[all.length - 1 - i];
+        }
+        return out;
+    }
+
+    /**
      * Two-species linear reaction–diffusion on (0, len), Dirichlet, interleaved unknowns (u_i, v_i):
      * J = K ⊗ I + diag(du, dv) ⊗ Δ_h with the 2×2 kinetic matrix K = [[k11, k12], [k21, k22]].
      */
