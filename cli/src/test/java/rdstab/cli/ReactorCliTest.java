@@ -125,6 +125,33 @@ class ReactorCliTest {
         assertTrue(new ObjectMapper().readTree(skipped.out()).get("energy").get("peak_amplification").isNull());
     }
 
+    /**
+     * The reactor demo at Péclet 200 (--set): eigenvalue condition numbers near e^100 in the original coordinates.
+     * The leading eigenvalues must come out real (the transport part is similar to a symmetric operator and the
+     * couplings do not make this case oscillatory; before the symmetrizing scaling the solver returned −19.9 and
+     * spurious complex pairs), with small error estimates, a huge sensitivity and its warning, in text and JSON.
+     */
+    @Test
+    void convectionDominatedReactorIsComputedAccuratelyAndFlagged() throws IOException {
+        Path demo = CasesTest.casesDir().resolve("tubular-reactor-cooled.yaml");
+        CliRun r = CliRun.of("check", demo.toString(), "--json", "--set", "Pe_m=200", "--set", "Pe_h=200", "--cells", "400",
+                "--amplification-budget", "0");
+        assertEquals(0, r.code(), r.err());
+        JsonNode d = new ObjectMapper().readTree(r.out());
+        assertEquals("stable", d.get("verdict").asText());
+        JsonNode lead = d.get("leading").get(0);
+        assertEquals(0.0, lead.get("im").asDouble(), 0.0);
+        // rdstab's own value, pinned as a regression check (the closed-form check is the solver's ConvectionDominatedTest)
+        assertEquals(-32.625, lead.get("re").asDouble(), 1e-3);
+        assertTrue(lead.get("error_estimate").asDouble() < 1e-9, lead.toString());
+        assertTrue(lead.get("condition").asDouble() > 1e20, lead.toString());
+        assertTrue(d.get("warnings").toString().contains("very sensitive"), d.get("warnings").toString());
+        CliRun text = CliRun.of("check", demo.toString(), "--set", "Pe_m=200", "--set", "Pe_h=200", "--cells", "400",
+                "--amplification-budget", "0");
+        assertTrue(text.out().contains("error est.  sensitivity"), text.out());
+        assertTrue(text.out().contains("very sensitive"), text.out());
+    }
+
     void badInput(String name, String text, String expected, String... more) throws IOException {
         Path p = tmp.resolve(name);
         Files.writeString(p, text);

@@ -158,7 +158,6 @@ public final class CheckCommand implements Callable<Integer> {
     static CheckResult withGridBand(GridStudyResult s) {
         CheckResult r = s.reportedCheck();
         double gci = Math.max(0, s.growthBand() - r.assessment().band());
-        return new CheckResult(r.problem(), r.base(), r.baseNodal(), r.baseMax(), r.modes(), r.shift(),
-                r.rightmostCertified(), r.energy(), r.assessment().withGridBand(gci, "GCI of 3 grids"), r.seconds());
+        return r.withAssessment(r.assessment().withGridBand(gci, "GCI of 3 grids"));
     }
 }

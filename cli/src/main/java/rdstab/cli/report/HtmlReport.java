@@ -104,13 +104,19 @@ public final class HtmlReport {
     private static void eigen(StringBuilder h, CheckResult r) {
         h.append("<h2>Eigenvalues</h2>\n<p>Rightmost eigenvalues of J x = λ M x by shift-invert (shift ")
                 .append(esc(TextReport.sig(r.shift(), 6))).append(r.rightmostCertified() ? "; rightmost set certified" : "; rightmost set not certified")
-                .append("). Residual = ‖J x − λ M x‖ / (‖J‖ ‖x‖).</p>\n");
-        h.append("<table class=\"eigenvalues\">\n<tr><th>#</th><th>Re λ</th><th>Im λ</th><th>residual</th></tr>\n");
-        int i = 1;
-        for (EigenPair e : r.modes()) {
-            h.append("<tr><td>").append(i++).append("</td><td>").append(esc(TextReport.sig(e.re(), 10))).append("</td><td>")
+                .append("). Residual = ‖J x − λ M x‖ / (‖J‖ ‖x‖). Error estimate: of the computed eigenvalue, condition ")
+                .append("number × backward error (first order). Sensitivity: condition number in the energy norm, how far a ")
+                .append("change δ of the operator can move the eigenvalue (about sensitivity·δ; 1 for a self-adjoint ")
+                .append("operator).</p>\n");
+        h.append("<table class=\"eigenvalues\">\n<tr><th>#</th><th>Re λ</th><th>Im λ</th><th>residual</th>"
+                + "<th>error estimate</th><th>sensitivity</th></tr>\n");
+        for (int i = 0; i < r.modes().size(); i++) {
+            EigenPair e = r.modes().get(i);
+            String[] cond = TextReport.conditioning(r, i).trim().split("\\s+");
+            h.append("<tr><td>").append(i + 1).append("</td><td>").append(esc(TextReport.sig(e.re(), 10))).append("</td><td>")
                     .append(esc(TextReport.sig(e.im(), 6))).append("</td><td>")
-                    .append(String.format(Locale.ROOT, "%.1e", e.residual())).append("</td></tr>\n");
+                    .append(String.format(Locale.ROOT, "%.1e", e.residual())).append("</td><td>").append(esc(cond[0]))
+                    .append("</td><td>").append(esc(cond[1])).append("</td></tr>\n");
         }
         h.append("</table>\n");
     }

@@ -44,11 +44,16 @@ public final class ResultJson {
         m.put("verdict", a.verdict().word());
         m.put("growth_rate", num(a.growthRate()));
         List<Object> leading = new ArrayList<>();
-        for (EigenPair e : r.modes()) {
+        for (int i = 0; i < r.modes().size(); i++) {
+            EigenPair e = r.modes().get(i);
             Map<String, Object> x = new LinkedHashMap<>();
             x.put("re", num(e.re()));
             x.put("im", num(e.im()));
             x.put("residual", num(e.residual()));
+            if (i < r.conditioning().size()) {
+                x.put("error_estimate", num(r.conditioning().get(i).errorEstimate()));
+                x.put("condition", num(r.conditioning().get(i).sensitivity()));
+            }
             leading.add(x);
         }
         m.put("leading", leading);

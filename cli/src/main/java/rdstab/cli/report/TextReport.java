@@ -62,11 +62,15 @@ public final class TextReport {
         w.println();
         w.printf(Locale.ROOT, "Rightmost eigenvalues of J x = λ M x (shift-invert, shift %s%s)%n", sig(r.shift(), 6),
                 r.rightmostCertified() ? ", rightmost set certified" : ", rightmost set not certified");
-        w.println("   #          Re λ             Im λ    residual");
-        int i = 1;
-        for (EigenPair e : r.modes()) {
-            w.printf(Locale.ROOT, "  %2d  %15s  %15s    %.1e%n", i++, sig(e.re(), 10), sig(e.im(), 6), e.residual());
+        w.println("   #          Re λ             Im λ    residual   error est.  sensitivity");
+        for (int i = 0; i < r.modes().size(); i++) {
+            EigenPair e = r.modes().get(i);
+            w.printf(Locale.ROOT, "  %2d  %15s  %15s    %.1e   %s%n", i + 1, sig(e.re(), 10), sig(e.im(), 6), e.residual(),
+                    conditioning(r, i));
         }
+        w.println("  (error est.: of the computed eigenvalue, condition number × backward error, first order;");
+        w.println("   sensitivity: condition number in the energy norm, how far a change δ of the operator can move it,");
+        w.println("   about sensitivity·δ; 1 for a self-adjoint operator)");
         w.println();
         EnergyRates en = r.energy();
         w.println("Energy method (growth rates; spectral ≤ numerical abscissa ≤ a-priori bound)");
@@ -166,6 +170,20 @@ public final class TextReport {
     }
 
     /** A number to the given significant digits, without exponent clutter where possible. */
+    /** "error estimate  sensitivity" columns of pair i, as in the eigenvalue tables of the text and HTML reports. */
+    static String conditioning(CheckResult r, int i) {
+        if (i >= r.conditioning().size() || Double.isNaN(r.conditioning().get(i).condition())) {
+            return String.format(Locale.ROOT, "%10s  %11s", "n/a", "n/a");
+        }
+        rdstab.solver.eigen.EigenConditioning.Estimate c = r.conditioning().get(i);
+        return String.format(Locale.ROOT, "%10s  %11s", sci(c.errorEstimate()),
+                c.sensitivity() == 1.0 ? "1" : sci(c.sensitivity()));
+    }
+
+    private static String sci(double v) {
+        return Double.isInfinite(v) ? "inf" : String.format(Locale.ROOT, "%.1e", v);
+    }
+
     public static String sig(double v, int digits) {
         if (v == 0) {
             return "0";

@@ -3,6 +3,7 @@ package rdstab.solver.drive;
 import java.util.List;
 import java.util.Map;
 import rdstab.solver.assess.Assessment;
+import rdstab.solver.eigen.EigenConditioning;
 import rdstab.solver.eigen.EigenPair;
 import rdstab.solver.energy.EnergyRates;
 import rdstab.solver.newton.BaseState;
@@ -18,6 +19,7 @@ import rdstab.solver.setup.Problem;
  * @param baseNodal        nodal values of the base state, [field][node] (fixed values included)
  * @param baseMax          largest nodal value per field
  * @param modes            rightmost eigenpairs, rightmost first, each with its residual
+ * @param conditioning     per mode (same order): condition number and error estimate of the eigenvalue
  * @param shift            the shift σ used by shift-invert
  * @param rightmostCertified true when the returned set is guaranteed to contain the rightmost eigenvalues
  * @param energy           energy-method rates
@@ -28,14 +30,17 @@ import rdstab.solver.setup.Problem;
  *                         when the base state is not uniform or the domain does not allow it)
  */
 public record CheckResult(Problem problem, BaseState base, double[][] baseNodal, Map<String, Double> baseMax,
-                          List<EigenPair> modes, double shift, boolean rightmostCertified, EnergyRates energy,
+                          List<EigenPair> modes, List<EigenConditioning.Estimate> conditioning, double shift, boolean rightmostCertified, EnergyRates energy,
                           Assessment assessment, Map<String, Double> seconds, PecletNumbers.Result flow,
                           DispersionRelation.Result dispersion) {
 
-    /** Without transport numbers and dispersion relation. */
-    public CheckResult(Problem problem, BaseState base, double[][] baseNodal, Map<String, Double> baseMax,
-                       List<EigenPair> modes, double shift, boolean rightmostCertified, EnergyRates energy,
-                       Assessment assessment, Map<String, Double> seconds) {
-        this(problem, base, baseNodal, baseMax, modes, shift, rightmostCertified, energy, assessment, seconds, null, null);
+    public CheckResult {
+        conditioning = List.copyOf(conditioning);
+    }
+
+    /** The same result with another assessment (a re-judged band). */
+    public CheckResult withAssessment(Assessment other) {
+        return new CheckResult(problem, base, baseNodal, baseMax, modes, conditioning, shift, rightmostCertified, energy,
+                other, seconds, flow, dispersion);
     }
 }

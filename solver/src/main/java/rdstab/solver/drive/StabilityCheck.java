@@ -10,7 +10,7 @@ import rdstab.mesh.assembly.FiniteVolume1D;
 import rdstab.solver.assess.Assessment;
 import rdstab.solver.assess.SafetyCautions;
 import rdstab.solver.assess.Verdict;
-import rdstab.solver.eigen.EigenChecks;
+import rdstab.solver.eigen.EigenConditioning;
 import rdstab.solver.eigen.EigenOptions;
 import rdstab.solver.eigen.EigenPair;
 import rdstab.solver.eigen.EigenSolvers;
@@ -71,6 +71,10 @@ public final class StabilityCheck {
         seconds.put("spectrum", (t2 - t1) * 1e-9);
         List<String> warnings = new ArrayList<>();
         List<EigenPair> modes = trusted(spectrum.pairs(), a.residualLimit(), warnings);
+        List<EigenConditioning.Estimate> conditioning = EigenConditioning.of(j, m, modes, spectrum.scaling(), symmetric, spectrum.shift(), opts);
+        long t2c = System.nanoTime();
+        seconds.put("conditioning", (t2c - t2) * 1e-9);
+        t2 = t2c;
         DMatrixSparseCSC t = p.transport().jacobian(base.u());
         EnergyRates energy = energy(c, d, j, t, m, modes.get(0).re(), a);
         seconds.put("energy", (System.nanoTime() - t2) * 1e-9);
@@ -104,9 +108,9 @@ public final class StabilityCheck {
             }
             dispersion = DispersionRelation.of(fv, base.u());
         }
-        Assessment as = assess(c, d, modes, energy, j, m, warnings);
-        return new CheckResult(p, base, nodal, max, modes, spectrum.shift(), spectrum.rightmostCertified(), energy, as, seconds,
-                flow, dispersion);
+        Assessment as = assess(c, d, modes, conditioning.get(0), energy, warnings);
+        return new CheckResult(p, base, nodal, max, modes, conditioning, spectrum.shift(), spectrum.rightmostCertified(),
+                energy, as, seconds, flow, dispersion);
     }
 
     /**
@@ -173,13 +177,56 @@ public final class StabilityCheck {
         return out;
     }
 
-    static Assessment assess(Case c, Discretization d, List<EigenPair> modes, EnergyRates energy, DMatrixSparseCSC j,
-                             DMatrixSparseCSC m, List<String> warnings) {
+    /** Fraction of |growth rate| above which the leading eigenvalue's error estimate earns a warning. */
+    static final double SENSITIVITY_WARNING = 1e-3;
+    /** Energy-norm condition number above which the leading eigenvalue is called very sensitive to the operator. */
+    static final double SENSITIVE_OPERATOR = 1e6;
+
+    /**
+     * The verdict. The band around zero is the larger of the case's marginal band and the leading eigenvalue's
+     * error estimate (condition number × backward error, {@link EigenConditioning}): within it the sign of the
+     * growth rate is not established. An energy rate (numerical abscissa) below −band proves decay whatever the
+     * eigenvalues' sensitivity, since it bounds every Re λ from the right.
+     */
+    static Assessment assess(Case c, Discretization d, List<EigenPair> modes, EigenConditioning.Estimate leadCondition,
+                             EnergyRates energy, List<String> warnings) {
         EigenPair lead = modes.get(0);
         double growth = lead.re();
-        double eigenError = EigenChecks.errorBound(lead, j, m);
-        double band = Math.max(c.analysis().marginalBand(), eigenError);
+        double marginal = c.analysis().marginalBand();
+        double eigenError = Double.isNaN(leadCondition.errorEstimate()) ? leadCondition.backwardError()
+                : leadCondition.errorEstimate();
+        double band = Math.max(marginal, eigenError);
         Verdict v = growth > band ? Verdict.UNSTABLE : growth < -band ? Verdict.STABLE : Verdict.MARGINAL;
+        boolean energyProof = energy.numericalAbscissa() < -marginal;
+        if (energyProof) {
+            v = Verdict.STABLE;
+        }
+        if (Double.isNaN(leadCondition.condition())) {
+            warnings.add("the condition number of the leading eigenvalue could not be computed (the transposed "
+                    + "eigenproblem did not converge): its error band is the backward error alone");
+        } else {
+            if (leadCondition.exceeds(SENSITIVITY_WARNING, growth, marginal)) {
+                String size = Double.isFinite(leadCondition.errorEstimate())
+                        ? String.format(java.util.Locale.ROOT, "about %.2g", leadCondition.errorEstimate()) : "any amount";
+                warnings.add(String.format(java.util.Locale.ROOT, "the computed leading eigenvalue may be off by %s "
+                        + "(condition number %.1e × backward error) although its residual is %.1e%s", size,
+                        leadCondition.condition(), lead.residual(),
+                        energyProof ? "; the negative energy rate still proves decay"
+                                : Math.abs(growth) <= eigenError ? "; the sign of the growth rate is not established by "
+                                + "the eigenvalues, and the energy rate is not negative either" : ""));
+            }
+            if (leadCondition.sensitivity() > SENSITIVE_OPERATOR) {
+                warnings.add(String.format(java.util.Locale.ROOT, "the leading eigenvalue is very sensitive to "
+                        + "unstructured changes of the operator (condition number %.1e in the energy norm; strongly "
+                        + "non-normal, as convection-dominated transport is): it is computed accurately for this model "
+                        + "(error estimate %.1e) and moves smoothly with the case's parameters, but a small term left out "
+                        + "of the model could move it by up to %.1e times that term's size; %s",
+                        leadCondition.sensitivity(), leadCondition.errorEstimate(), leadCondition.sensitivity(),
+                        energyProof ? "the negative energy rate proves decay regardless"
+                                : "the energy rate and the transient growth describe such an operator's disturbances "
+                                + "better than the eigenvalue alone"));
+            }
+        }
         double efold = growth == 0 ? Double.POSITIVE_INFINITY : 1.0 / Math.abs(growth);
         double[][] mode = d.nodalPerturbation(lead.vectorRe());
         double[][] modeIm = d.nodalPerturbation(lead.vectorIm());

@@ -215,12 +215,7 @@ public final class EigenChecks {
      */
     public static double errorBound(EigenPair e, DMatrixSparseCSC j, DMatrixSparseCSC m) {
         int n = j.numRows;
-        double[] w = new double[n];
-        for (int c = 0; c < m.numCols; c++) {
-            for (int p = m.col_idx[c]; p < m.col_idx[c + 1]; p++) {
-                w[m.nz_rows[p]] += m.nz_values[p];
-            }
-        }
+        double[] w = rowSums(m);
         double[] xr = e.vectorRe();
         double[] xi = e.vectorIm();
         double[] jr = multiply(j, xr);
@@ -236,6 +231,17 @@ public final class EigenChecks {
             den += xr[i] * mr[i] + xi[i] * mi[i];
         }
         return Math.sqrt(num / den);
+    }
+
+    /** Row sums of M: the diagonal weights W that stand in for M in the energy-norm bounds (W = M when M is diagonal). */
+    static double[] rowSums(DMatrixSparseCSC m) {
+        double[] w = new double[m.numRows];
+        for (int c = 0; c < m.numCols; c++) {
+            for (int p = m.col_idx[c]; p < m.col_idx[c + 1]; p++) {
+                w[m.nz_rows[p]] += m.nz_values[p];
+            }
+        }
+        return w;
     }
 
     private static double[] multiply(DMatrixSparseCSC a, double[] x) {

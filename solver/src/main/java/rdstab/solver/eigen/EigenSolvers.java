@@ -20,9 +20,26 @@ public final class EigenSolvers {
         return options.symmetric() ? new ThickRestartLanczos() : new ShiftInvertArnoldi();
     }
 
-    /** Solves J x = λ M x for the rightmost eigenpairs with the solver {@link #create} picks. */
+    /**
+     * Solves J x = λ M x for the rightmost eigenpairs with the solver {@link #create} picks. A non-symmetric J
+     * with a diagonal M is first brought as close to symmetric as a diagonal similarity can
+     * ({@link DiagonalScaling#symmetrizing}): same eigenvalues, computed where they are well conditioned; the
+     * pairs come back in the original coordinates, with residuals against J.
+     */
     public static Spectrum solve(org.ejml.data.DMatrixSparseCSC j, org.ejml.data.DMatrixSparseCSC m, EigenOptions options) {
-        return create(options, j.numRows).solve(j, m, options);
+        EigenSolver solver = create(options, j.numRows);
+        if (options.symmetric() || solver instanceof DenseEigenSolver) {
+            return solver.solve(j, m, options);
+        }
+        long t0 = System.nanoTime();
+        DiagonalScaling s = DiagonalScaling.symmetrizing(j, m);
+        if (s.isIdentity()) {
+            double looked = (System.nanoTime() - t0) * 1e-9;
+            return solver.solve(j, m, options).plusPreparation(looked);
+        }
+        org.ejml.data.DMatrixSparseCSC scaled = s.scale(j);
+        double prepared = (System.nanoTime() - t0) * 1e-9;
+        return solver.solve(scaled, m, options).inOriginalCoordinates(s, j, m, prepared);
     }
 
     /** Name of the ARPACK implementation that loads in this JVM (f2j pure Java or native JNI). */
