@@ -146,10 +146,13 @@ class ReactorCliTest {
         assertTrue(lead.get("error_estimate").asDouble() < 1e-9, lead.toString());
         assertTrue(lead.get("condition").asDouble() > 1e20, lead.toString());
         assertTrue(d.get("warnings").toString().contains("very sensitive"), d.get("warnings").toString());
+        // the symmetrizing scaling spans about e^(Pe/2) (the exponential factor of the transport's eigenfunctions)
+        assertTrue(d.get("scaling_span").asDouble() > 1e40, "scaling span " + d.get("scaling_span"));
         CliRun text = CliRun.of("check", demo.toString(), "--set", "Pe_m=200", "--set", "Pe_h=200", "--cells", "400",
                 "--amplification-budget", "0");
         assertTrue(text.out().contains("error est.  sensitivity"), text.out());
         assertTrue(text.out().contains("very sensitive"), text.out());
+        assertTrue(text.out().contains("solved under a symmetrizing diagonal scaling"), text.out());
     }
 
     void badInput(String name, String text, String expected, String... more) throws IOException {

@@ -107,7 +107,7 @@ public final class HtmlReport {
                 .append("). Residual = ‖J x − λ M x‖ / (‖J‖ ‖x‖). Error estimate: of the computed eigenvalue, condition ")
                 .append("number × backward error (first order). Sensitivity: condition number in the energy norm, how far a ")
                 .append("change δ of the operator can move the eigenvalue (about sensitivity·δ; 1 for a self-adjoint ")
-                .append("operator).</p>\n");
+                .append("operator).").append(r.scalingSpan() > 1 ? " " + esc(TextReport.scalingNote(r)) : "").append("</p>\n");
         h.append("<table class=\"eigenvalues\">\n<tr><th>#</th><th>Re λ</th><th>Im λ</th><th>residual</th>"
                 + "<th>error estimate</th><th>sensitivity</th></tr>\n");
         for (int i = 0; i < r.modes().size(); i++) {

@@ -94,6 +94,7 @@ public final class ResultJson {
         peak.put("x", a.peakX());
         m.put("leading_mode_peak", peak);
         m.put("shift", num(r.shift()));
+        m.put("scaling_span", num(r.scalingSpan()));
         m.put("rightmost_certified", r.rightmostCertified());
         m.put("cells", r.problem().theCase().mesh().cells());
         m.put("warnings", a.warnings());

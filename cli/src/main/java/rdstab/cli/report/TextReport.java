@@ -62,6 +62,9 @@ public final class TextReport {
         w.println();
         w.printf(Locale.ROOT, "Rightmost eigenvalues of J x = λ M x (shift-invert, shift %s%s)%n", sig(r.shift(), 6),
                 r.rightmostCertified() ? ", rightmost set certified" : ", rightmost set not certified");
+        if (r.scalingSpan() > 1) {
+            w.println("  " + scalingNote(r));
+        }
         w.println("   #          Re λ             Im λ    residual   error est.  sensitivity");
         for (int i = 0; i < r.modes().size(); i++) {
             EigenPair e = r.modes().get(i);
@@ -170,6 +173,12 @@ public final class TextReport {
     }
 
     /** A number to the given significant digits, without exponent clutter where possible. */
+    /** One sentence on the symmetrizing scaling the eigenvalues were computed under (text and HTML reports). */
+    static String scalingNote(CheckResult r) {
+        return String.format(Locale.ROOT, "(solved under a symmetrizing diagonal scaling D⁻¹JD of span %.1e, where these "
+                + "eigenvalues are well conditioned; residuals are those of the scaled pencil)", r.scalingSpan());
+    }
+
     /** "error estimate  sensitivity" columns of pair i, as in the eigenvalue tables of the text and HTML reports. */
     static String conditioning(CheckResult r, int i) {
         if (i >= r.conditioning().size() || Double.isNaN(r.conditioning().get(i).condition())) {

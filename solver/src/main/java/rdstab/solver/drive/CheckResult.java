@@ -21,6 +21,8 @@ import rdstab.solver.setup.Problem;
  * @param modes            rightmost eigenpairs, rightmost first, each with its residual
  * @param conditioning     per mode (same order): condition number and error estimate of the eigenvalue
  * @param shift            the shift σ used by shift-invert
+ * @param scalingSpan      max d / min d of the symmetrizing diagonal scaling the eigenvalues were computed under
+ *                         (1 when none; then residuals are those of the scaled pencil)
  * @param rightmostCertified true when the returned set is guaranteed to contain the rightmost eigenvalues
  * @param energy           energy-method rates
  * @param assessment       verdict and what it means
@@ -30,7 +32,7 @@ import rdstab.solver.setup.Problem;
  *                         when the base state is not uniform or the domain does not allow it)
  */
 public record CheckResult(Problem problem, BaseState base, double[][] baseNodal, Map<String, Double> baseMax,
-                          List<EigenPair> modes, List<EigenConditioning.Estimate> conditioning, double shift, boolean rightmostCertified, EnergyRates energy,
+                          List<EigenPair> modes, List<EigenConditioning.Estimate> conditioning, double shift, double scalingSpan, boolean rightmostCertified, EnergyRates energy,
                           Assessment assessment, Map<String, Double> seconds, PecletNumbers.Result flow,
                           DispersionRelation.Result dispersion) {
 
@@ -40,7 +42,7 @@ public record CheckResult(Problem problem, BaseState base, double[][] baseNodal,
 
     /** The same result with another assessment (a re-judged band). */
     public CheckResult withAssessment(Assessment other) {
-        return new CheckResult(problem, base, baseNodal, baseMax, modes, conditioning, shift, rightmostCertified, energy,
+        return new CheckResult(problem, base, baseNodal, baseMax, modes, conditioning, shift, scalingSpan, rightmostCertified, energy,
                 other, seconds, flow, dispersion);
     }
 }

@@ -109,7 +109,8 @@ public final class StabilityCheck {
             dispersion = DispersionRelation.of(fv, base.u());
         }
         Assessment as = assess(c, d, modes, conditioning.get(0), energy, warnings);
-        return new CheckResult(p, base, nodal, max, modes, conditioning, spectrum.shift(), spectrum.rightmostCertified(),
+        return new CheckResult(p, base, nodal, max, modes, conditioning, spectrum.shift(), spectrum.scaling().span(),
+                spectrum.rightmostCertified(),
                 energy, as, seconds, flow, dispersion);
     }
 
