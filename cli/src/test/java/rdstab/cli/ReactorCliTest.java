@@ -155,6 +155,29 @@ class ReactorCliTest {
         assertTrue(text.out().contains("solved under a symmetrizing diagonal scaling"), text.out());
     }
 
+    /**
+     * Different Péclet numbers for the two fields (Pe_m = 60 or 200, Pe_h = 6): a scaling that symmetrized each field
+     * but ignored the reactant–temperature coupling once blew that coupling up by e^27, placed the shift at 2.5e12 and
+     * returned a wrong eigenvalue (+23) or crashed ARPACK. The scaling must now be refused unless it lowers ‖J‖_F, and
+     * the answer must match the unscaled computation, whose leading eigenvalue is well conditioned here (κ about 5;
+     * -0.66362505 and -0.55200646 are rdstab's own values, pinned as regression checks).
+     */
+    @Test
+    void scalingNeverWorsensACoupledReactor() throws IOException {
+        Path demo = CasesTest.casesDir().resolve("tubular-reactor-cooled.yaml");
+        double[][] cases = {{60, -0.66362505}, {200, -0.55200646}};
+        for (double[] c : cases) {
+            CliRun r = CliRun.of("check", demo.toString(), "--json", "--set", "Pe_m=" + (int) c[0], "--amplification-budget", "0");
+            assertEquals(0, r.code(), r.err());
+            JsonNode d = new ObjectMapper().readTree(r.out());
+            assertEquals("stable", d.get("verdict").asText(), "Pe_m = " + c[0]);
+            JsonNode lead = d.get("leading").get(0);
+            assertEquals(c[1], lead.get("re").asDouble(), 1e-7, "Pe_m = " + c[0]);
+            assertTrue(lead.get("error_estimate").asDouble() < 1e-8, lead.toString());
+            assertTrue(d.get("shift").asDouble() < 100, "shift " + d.get("shift"));
+        }
+    }
+
     void badInput(String name, String text, String expected, String... more) throws IOException {
         Path p = tmp.resolve(name);
         Files.writeString(p, text);
