@@ -72,7 +72,7 @@ public final class DiagonalScaling {
 
     /**
      * The symmetrizing scaling of J for the pencil (J, M), or the identity when M is not diagonal, J is
-     * symmetric already, or the scaling would span no more than {@link #MIN_SPAN}.
+     * symmetric already, the scaling would span no more than {@link #MIN_SPAN}, or it would not lower ‖J‖_F.
      */
     public static DiagonalScaling symmetrizing(DMatrixSparseCSC j, DMatrixSparseCSC m) {
         if (!SparseOps.isDiagonal(m)) {
