@@ -112,7 +112,7 @@ public final class HtmlReport {
                 + "<th>error estimate</th><th>sensitivity</th></tr>\n");
         for (int i = 0; i < r.modes().size(); i++) {
             EigenPair e = r.modes().get(i);
-            String[] cond = TextReport.conditioning(r, i).trim().split("\\s+");
+            String[] cond = TextReport.conditioning(r, i);
             h.append("<tr><td>").append(i + 1).append("</td><td>").append(esc(TextReport.sig(e.re(), 10))).append("</td><td>")
                     .append(esc(TextReport.sig(e.im(), 6))).append("</td><td>")
                     .append(String.format(Locale.ROOT, "%.1e", e.residual())).append("</td><td>").append(esc(cond[0]))

@@ -68,8 +68,9 @@ public final class TextReport {
         w.println("   #          Re λ             Im λ    residual   error est.  sensitivity");
         for (int i = 0; i < r.modes().size(); i++) {
             EigenPair e = r.modes().get(i);
-            w.printf(Locale.ROOT, "  %2d  %15s  %15s    %.1e   %s%n", i + 1, sig(e.re(), 10), sig(e.im(), 6), e.residual(),
-                    conditioning(r, i));
+            String[] cond = conditioning(r, i);
+            w.printf(Locale.ROOT, "  %2d  %15s  %15s    %.1e   %10s  %11s%n", i + 1, sig(e.re(), 10), sig(e.im(), 6),
+                    e.residual(), cond[0], cond[1]);
         }
         w.println("  (error est.: of the computed eigenvalue, condition number × backward error, first order;");
         w.println("   sensitivity: condition number in the energy norm, how far a change δ of the operator can move it,");
@@ -179,14 +180,13 @@ public final class TextReport {
                 + "eigenvalues are well conditioned; residuals are those of the scaled pencil)", r.scalingSpan());
     }
 
-    /** "error estimate  sensitivity" columns of pair i, as in the eigenvalue tables of the text and HTML reports. */
-    static String conditioning(CheckResult r, int i) {
+    /** The error estimate and sensitivity of pair i as shown in the eigenvalue tables of the text and HTML reports. */
+    static String[] conditioning(CheckResult r, int i) {
         if (i >= r.conditioning().size() || Double.isNaN(r.conditioning().get(i).condition())) {
-            return String.format(Locale.ROOT, "%10s  %11s", "n/a", "n/a");
+            return new String[] {"n/a", "n/a"};
         }
         rdstab.solver.eigen.EigenConditioning.Estimate c = r.conditioning().get(i);
-        return String.format(Locale.ROOT, "%10s  %11s", sci(c.errorEstimate()),
-                c.sensitivity() == 1.0 ? "1" : sci(c.sensitivity()));
+        return new String[] {sci(c.errorEstimate()), c.sensitivity() == 1.0 ? "1" : sci(c.sensitivity())};
     }
 
     private static String sci(double v) {

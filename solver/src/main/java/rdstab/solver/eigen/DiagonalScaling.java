@@ -75,18 +75,28 @@ public final class DiagonalScaling {
      * symmetric already, the scaling would span no more than {@link #MIN_SPAN}, or it would not lower ‖J‖_F.
      */
     public static DiagonalScaling symmetrizing(DMatrixSparseCSC j, DMatrixSparseCSC m) {
+        return symmetrize(j, m).scaling();
+    }
+
+    /** A scaling with the matrix it produced (J itself for the identity), so that D⁻¹JD is formed once. */
+    record Symmetrized(DiagonalScaling scaling, DMatrixSparseCSC scaled) {
+    }
+
+    /** {@link #symmetrizing} with D⁻¹JD, which its Frobenius-norm test has formed anyway. */
+    static Symmetrized symmetrize(DMatrixSparseCSC j, DMatrixSparseCSC m) {
+        Symmetrized none = new Symmetrized(IDENTITY, j);
         if (!SparseOps.isDiagonal(m)) {
-            return IDENTITY;
+            return none;
         }
         Pairs pairs = Pairs.of(j);
         if (pairs.count == 0 || !pairs.asymmetric) {
-            return IDENTITY;
+            return none;
         }
         double[] s = pairs.integrateAlongTrees(j.numCols);
         if (pairs.inconsistency(s) > CONSISTENT * Math.max(1.0, pairs.largestTarget())) {
             s = pairs.leastSquares(j.numCols);
             if (s == null) {
-                return IDENTITY; // a scaling is an improvement, never a requirement
+                return none; // a scaling is an improvement, never a requirement
             }
         }
         double lo = Double.POSITIVE_INFINITY;
@@ -96,7 +106,7 @@ public final class DiagonalScaling {
             hi = Math.max(hi, v);
         }
         if (!(hi - lo > Math.log(MIN_SPAN))) {
-            return IDENTITY;
+            return none;
         }
         double mid = 0.5 * (hi + lo);
         double[] d = new double[s.length];
@@ -107,7 +117,8 @@ public final class DiagonalScaling {
         // accept only a scaling that lowers ‖J‖_F: the eigenvalues stay, so Henrici's departure from normality
         // (‖J‖_F² − Σ|λ|²) falls with it. Guards against couplings the conditions could not reach (an entry whose
         // mirror is zero), which a scaling can blow up.
-        return offDiagonalFrobenius(scaling.scale(j)) < (1 - 1e-3) * offDiagonalFrobenius(j) ? scaling : IDENTITY;
+        DMatrixSparseCSC scaled = scaling.scale(j);
+        return offDiagonalFrobenius(scaled) < (1 - 1e-3) * offDiagonalFrobenius(j) ? new Symmetrized(scaling, scaled) : none;
     }
 
     /** ‖J − diag(J)‖_F, the part of the Frobenius norm a diagonal similarity can change. */

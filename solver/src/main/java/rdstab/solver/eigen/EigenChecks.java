@@ -65,20 +65,9 @@ public final class EigenChecks {
         boolean real = im == 0.0 && (xi0 == null || isZero(xi0));
         double[] xr = xr0.clone();
         double[] xi = real ? new double[n] : xi0.clone();
-        fixPhase(xr, real ? null : xi);
         double[] mr = new double[n];
-        SparseOps.multiply(m, xr, mr);
         double[] mi = real ? null : new double[n];
-        double mnorm2 = dot(xr, mr);
-        if (!real) {
-            SparseOps.multiply(m, xi, mi);
-            mnorm2 += dot(xi, mi);
-        }
-        double inv = mnorm2 > 0 ? 1.0 / Math.sqrt(mnorm2) : 1.0;
-        scale(inv, xr, mr);
-        if (!real) {
-            scale(inv, xi, mi);
-        }
+        normalize(xr, real ? null : xi, m, mr, mi);
         double[] jr = new double[n];
         SparseOps.multiply(j, xr, jr);
         double res2;
@@ -98,6 +87,35 @@ public final class EigenChecks {
             residual = Double.NaN;
         }
         return new EigenPair(re, im, xr, xi, residual);
+    }
+
+    /**
+     * The pair with x normalised as {@link #check} does (phase fixed, unit M-norm) and the given residual kept:
+     * for vectors whose residual was measured elsewhere (in the scaled coordinates of a {@link DiagonalScaling}).
+     */
+    static EigenPair normalized(double re, double im, double[] xr0, double[] xi0, DMatrixSparseCSC m, double residual) {
+        int n = xr0.length;
+        boolean real = im == 0.0 && (xi0 == null || isZero(xi0));
+        double[] xr = xr0.clone();
+        double[] xi = real ? new double[n] : xi0.clone();
+        normalize(xr, real ? null : xi, m, new double[n], real ? null : new double[n]);
+        return new EigenPair(re, im, xr, xi, residual);
+    }
+
+    /** Fixes the phase of x = xr + i·xi (xi null: real) and scales it to unit M-norm; mr, mi receive M x. */
+    private static void normalize(double[] xr, double[] xi, DMatrixSparseCSC m, double[] mr, double[] mi) {
+        fixPhase(xr, xi);
+        SparseOps.multiply(m, xr, mr);
+        double mnorm2 = dot(xr, mr);
+        if (xi != null) {
+            SparseOps.multiply(m, xi, mi);
+            mnorm2 += dot(xi, mi);
+        }
+        double inv = mnorm2 > 0 ? 1.0 / Math.sqrt(mnorm2) : 1.0;
+        scale(inv, xr, mr);
+        if (xi != null) {
+            scale(inv, xi, mi);
+        }
     }
 
     /**
@@ -214,8 +232,12 @@ public final class EigenChecks {
      * for a non-normal operator η is a first-order estimate only.
      */
     public static double errorBound(EigenPair e, DMatrixSparseCSC j, DMatrixSparseCSC m) {
+        return errorBound(e, j, m, rowSums(m));
+    }
+
+    /** {@link #errorBound(EigenPair, DMatrixSparseCSC, DMatrixSparseCSC)} with the row sums w of M given. */
+    static double errorBound(EigenPair e, DMatrixSparseCSC j, DMatrixSparseCSC m, double[] w) {
         int n = j.numRows;
-        double[] w = rowSums(m);
         double[] xr = e.vectorRe();
         double[] xi = e.vectorIm();
         double[] jr = multiply(j, xr);

@@ -85,7 +85,7 @@ public final class EigenConditioning {
         double[] w = EigenChecks.rowSums(m);
         if (selfAdjoint) {
             for (EigenPair p : pairs) {
-                double eta = EigenChecks.errorBound(p, j, m);
+                double eta = EigenChecks.errorBound(p, j, m, w);
                 out.add(new Estimate(1.0, eta, 0.0, eta, 1.0));
             }
             return out;
@@ -107,7 +107,7 @@ public final class EigenConditioning {
         for (EigenPair p : pairs) {
             EigenPair pb = scaling.isIdentity() ? p
                     : new EigenPair(p.re(), p.im(), scaling.toScaled(p.vectorRe()), scaling.toScaled(p.vectorIm()), p.residual());
-            double eta = EigenChecks.errorBound(pb, jb, m);
+            double eta = EigenChecks.errorBound(pb, jb, m, w);
             int best = nearest(p, left, used);
             if (best < 0) {
                 out.add(new Estimate(Double.NaN, eta, Double.NaN, Double.NaN, Double.NaN));

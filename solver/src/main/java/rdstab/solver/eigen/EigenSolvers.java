@@ -24,7 +24,7 @@ public final class EigenSolvers {
      * Solves J x = λ M x for the rightmost eigenpairs with the solver {@link #create} picks. A non-symmetric J
      * with a diagonal M is first brought as close to symmetric as a diagonal similarity can
      * ({@link DiagonalScaling#symmetrizing}): same eigenvalues, computed where they are well conditioned; the
-     * pairs come back in the original coordinates, with residuals against J.
+     * eigenvectors come back in the original coordinates, the residuals stay those of the scaled pencil.
      */
     public static Spectrum solve(org.ejml.data.DMatrixSparseCSC j, org.ejml.data.DMatrixSparseCSC m, EigenOptions options) {
         EigenSolver solver = create(options, j.numRows);
@@ -32,14 +32,10 @@ public final class EigenSolvers {
             return solver.solve(j, m, options);
         }
         long t0 = System.nanoTime();
-        DiagonalScaling s = DiagonalScaling.symmetrizing(j, m);
-        if (s.isIdentity()) {
-            double looked = (System.nanoTime() - t0) * 1e-9;
-            return solver.solve(j, m, options).plusPreparation(looked);
-        }
-        org.ejml.data.DMatrixSparseCSC scaled = s.scale(j);
+        DiagonalScaling.Symmetrized s = DiagonalScaling.symmetrize(j, m);
         double prepared = (System.nanoTime() - t0) * 1e-9;
-        return solver.solve(scaled, m, options).inOriginalCoordinates(s, j, m, prepared);
+        Spectrum sp = solver.solve(s.scaled(), m, options);
+        return s.scaling().isIdentity() ? sp.plusPreparation(prepared) : sp.inOriginalCoordinates(s.scaling(), m, prepared);
     }
 
     /** Name of the ARPACK implementation that loads in this JVM (f2j pure Java or native JNI). */
